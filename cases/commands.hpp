@@ -1,0 +1,13 @@
+#pragma once
+// The subcommands of the `stackbound` program. Each registers itself on the app; its callback does
+// the work and throws units::InputError for bad input (main() prints it and exits with code 2).
+
+#include <CLI/CLI.hpp>
+
+#include "cases/cli_support.hpp"
+
+namespace stackbound::cases {
+
+void add_species_command(CLI::App& app, const GlobalOptions& global);
+
+}  // namespace stackbound::cases

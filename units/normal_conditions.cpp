@@ -1,0 +1,57 @@
+#include "units/normal_conditions.hpp"
+
+#include <array>
+#include <string>
+
+#include "units/constants.hpp"
+#include "units/input_error.hpp"
+
+namespace stackbound::units {
+
+namespace {
+// 60 degF = 288.705556 K; 14.696 psia (US gas-industry base, e.g. AGA Report 3 / GPA 2172, from memory).
+constexpr double kSixtyFahrenheit_K = (60.0 - 32.0) * 5.0 / 9.0 + kCelsiusOffset_K;
+
+constexpr std::array<NormalConditions, 5> kPresets{{
+    {"0C", "0 degC, 101.325 kPa (EU practice, normal cubic metre)", 273.15, kStandardAtmosphere_Pa},
+    {"15C", "15 degC, 101.325 kPa (ISO 13443 standard reference conditions)", 288.15, kStandardAtmosphere_Pa},
+    {"20C", "20 degC, 101.325 kPa (US EPA standard conditions, 68 degF and 29.92 inHg, 40 CFR 60.2)", 293.15,
+     kStandardAtmosphere_Pa},
+    {"60F", "60 degF, 14.696 psia (US gas industry)", kSixtyFahrenheit_K, 14.696 * kPsi_Pa},
+    {"IED", "273.15 K, 101.3 kPa (Directive 2010/75/EU Annex V reference state)", 273.15, 101300.0},
+}};
+}  // namespace
+
+double NormalConditions::molar_volume_m3_per_mol() const {
+  return kGasConstant_J_per_mol_K * temperature_K / pressure_Pa;
+}
+
+const NormalConditions& normal_0C() { return kPresets[0]; }
+const NormalConditions& normal_15C() { return kPresets[1]; }
+const NormalConditions& normal_20C() { return kPresets[2]; }
+const NormalConditions& normal_60F() { return kPresets[3]; }
+const NormalConditions& normal_eu_ied() { return kPresets[4]; }
+std::span<const NormalConditions> all_normal_conditions() { return kPresets; }
+
+const NormalConditions& normal_conditions_by_key(std::string_view key, std::string_view field) {
+  for (const NormalConditions& preset : kPresets) {
+    if (preset.key == key) return preset;
+  }
+  std::string accepted;
+  for (const NormalConditions& preset : kPresets) {
+    if (!accepted.empty()) accepted += ", ";
+        accepted += preset.key;
+  }
+  throw InputError(std::string(field) + " = \"" + std::string(key) + "\": unknown normal conditions; accepted: " +
+                   accepted);
+}
+
+NormalVolume NormalVolume::from_cubic_metres(double normal_m3, const NormalConditions& conditions) {
+  return NormalVolume(moles(normal_m3 / conditions.molar_volume_m3_per_mol()));
+}
+
+double NormalVolume::cubic_metres(const NormalConditions& conditions) const {
+  return amount_.value() * conditions.molar_volume_m3_per_mol();
+}
+
+}  // namespace stackbound::units

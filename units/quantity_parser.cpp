@@ -1,0 +1,335 @@
+#include "units/quantity_parser.hpp"
+
+#include <algorithm>
+#include <array>
+#include <charconv>
+#include <cmath>
+#include <vector>
+
+#include "units/constants.hpp"
+#include "units/input_error.hpp"
+#include "units/nearest_name.hpp"
+
+namespace stackbound::units {
+
+namespace {
+
+using D = Dimension;
+constexpr double kHour_s = 3600.0;
+constexpr double kDay_s = 86400.0;
+// A year of 8760 h (365 days) for annual totals; common practice in permit arithmetic, no source.
+constexpr double kYear_s = 8760.0 * kHour_s;
+constexpr double kPoundMole_mol = kPound_kg * 1000.0;
+constexpr double kCubicFoot_m3 = kFoot_m * kFoot_m * kFoot_m;
+// Grain = 1/7000 lb. Source: International Yard and Pound Agreement (1959).
+constexpr double kGrain_kg = kPound_kg / 7000.0;
+constexpr double kFahrenheitOffset_K = kCelsiusOffset_K - 32.0 * 5.0 / 9.0;
+
+// The normal-volume units resolve to moles through the molar volume of their conditions, which
+// needs a division at start-up; the table is therefore built once, then read only.
+std::vector<UnitDefinition> build_table() {
+  const NormalConditions* n0 = &normal_0C();
+  const NormalConditions* n15 = &normal_15C();
+  const NormalConditions* n20 = &normal_20C();
+  const NormalConditions* n60 = &normal_60F();
+  const double nm3 = 1.0 / n0->molar_volume_m3_per_mol();          // mol per Nm3 (0 degC)
+  const double sm3 = 1.0 / n15->molar_volume_m3_per_mol();         // mol per Sm3 (15 degC)
+  const double scf = kCubicFoot_m3 / n60->molar_volume_m3_per_mol();  // mol per scf (60 degF)
+  const double dscf = kCubicFoot_m3 / n20->molar_volume_m3_per_mol(); // mol per dscf (68 degF, EPA)
+  const double dscm = 1.0 / n20->molar_volume_m3_per_mol();        // mol per dscm (20 degC, EPA)
+  const double K0 = kCelsiusOffset_K;
+  return {
+      // temperature (absolute)
+      {"K", D::temperature, 1.0},
+      {"degC", D::temperature, 1.0, K0},
+      {"°C", D::temperature, 1.0, K0},
+      {"degF", D::temperature, 5.0 / 9.0, kFahrenheitOffset_K},
+      {"°F", D::temperature, 5.0 / 9.0, kFahrenheitOffset_K},
+      {"degR", D::temperature, 5.0 / 9.0},
+      // pressure (absolute)
+      {"Pa", D::pressure, 1.0},
+      {"hPa", D::pressure, 1e2},
+      {"kPa", D::pressure, 1e3},
+      {"MPa", D::pressure, 1e6},
+      {"bar", D::pressure, 1e5},
+      {"mbar", D::pressure, 1e2},
+      {"atm", D::pressure, kStandardAtmosphere_Pa},
+      {"psia", D::pressure, kPsi_Pa},
+      {"inHg", D::pressure, kInchMercury_Pa},
+      {"mmHg", D::pressure, 133.322387415},  // conventional mmHg. Source: NIST SP 811, Appendix B.
+      // fraction
+      {"%", D::fraction, 1e-2},
+      {"ppm", D::fraction, 1e-6},
+      {"ppmv", D::fraction, 1e-6},
+      {"ppb", D::fraction, 1e-9},
+      {"ppbv", D::fraction, 1e-9},
+      // mass
+      {"kg", D::mass, 1.0},
+      {"g", D::mass, 1e-3},
+      {"t", D::mass, 1e3},
+      {"lb", D::mass, kPound_kg},
+      // amount (normal volumes are amounts of gas)
+      {"mol", D::amount, 1.0},
+      {"kmol", D::amount, 1e3},
+      {"lbmol", D::amount, kPoundMole_mol},
+      {"Nm3", D::amount, nm3, 0.0, n0},
+      {"Sm3", D::amount, sm3, 0.0, n15},
+      {"scf", D::amount, scf, 0.0, n60},
+      {"Mscf", D::amount, 1e3 * scf, 0.0, n60},
+      {"MMscf", D::amount, 1e6 * scf, 0.0, n60},
+      {"dscf", D::amount, dscf, 0.0, n20},
+      {"dscm", D::amount, dscm, 0.0, n20},
+      // energy
+      {"J", D::energy, 1.0},
+      {"kJ", D::energy, 1e3},
+      {"MJ", D::energy, 1e6},
+      {"GJ", D::energy, 1e9},
+      {"TJ", D::energy, 1e12},
+      {"kWh", D::energy, 3.6e6},
+      {"MWh", D::energy, 3.6e9},
+      {"GWh", D::energy, 3.6e12},
+      {"Btu", D::energy, kBtuIT_J},
+      {"MMBtu", D::energy, 1e6 * kBtuIT_J},
+      // power
+      {"W", D::power, 1.0},
+      {"kW", D::power, 1e3},
+      {"MW", D::power, 1e6},
+      {"GW", D::power, 1e9},
+      {"Btu/h", D::power, kBtuIT_J / kHour_s},
+      {"MMBtu/h", D::power, 1e6 * kBtuIT_J / kHour_s},
+      {"MMBtu/hr", D::power, 1e6 * kBtuIT_J / kHour_s},
+      // time
+      {"s", D::time, 1.0},
+      {"min", D::time, 60.0},
+      {"h", D::time, kHour_s},
+      {"hr", D::time, kHour_s},
+      {"d", D::time, kDay_s},
+      {"yr", D::time, kYear_s},
+      // mass flow
+      {"kg/s", D::mass_flow, 1.0},
+      {"kg/h", D::mass_flow, 1.0 / kHour_s},
+      {"kg/hr", D::mass_flow, 1.0 / kHour_s},
+      {"g/s", D::mass_flow, 1e-3},
+      {"t/h", D::mass_flow, 1e3 / kHour_s},
+      {"t/d", D::mass_flow, 1e3 / kDay_s},
+      {"t/yr", D::mass_flow, 1e3 / kYear_s},
+      {"lb/h", D::mass_flow, kPound_kg / kHour_s},
+      {"lb/hr", D::mass_flow, kPound_kg / kHour_s},
+      {"lb/s", D::mass_flow, kPound_kg},
+      // molar flow (normal-volume flows are molar flows)
+      {"mol/s", D::molar_flow, 1.0},
+      {"kmol/h", D::molar_flow, 1e3 / kHour_s},
+      {"kmol/s", D::molar_flow, 1e3},
+      {"lbmol/h", D::molar_flow, kPoundMole_mol / kHour_s},
+      {"Nm3/h", D::molar_flow, nm3 / kHour_s, 0.0, n0},
+      {"Nm3/s", D::molar_flow, nm3, 0.0, n0},
+      {"Sm3/h", D::molar_flow, sm3 / kHour_s, 0.0, n15},
+      {"Sm3/d", D::molar_flow, sm3 / kDay_s, 0.0, n15},
+      {"scfm", D::molar_flow, scf / 60.0, 0.0, n60},
+      {"scfh", D::molar_flow, scf / kHour_s, 0.0, n60},
+      {"MMscfd", D::molar_flow, 1e6 * scf / kDay_s, 0.0, n60},
+      {"dscfm", D::molar_flow, dscf / 60.0, 0.0, n20},
+      // heating values and other energy per mass
+      {"J/kg", D::specific_energy, 1.0},
+      {"kJ/kg", D::specific_energy, 1e3},
+      {"MJ/kg", D::specific_energy, 1e6},
+      {"GJ/t", D::specific_energy, 1e6},
+      {"Btu/lb", D::specific_energy, kBtuIT_J / kPound_kg},
+      // energy per amount of gas
+      {"J/mol", D::molar_energy, 1.0},
+      {"kJ/mol", D::molar_energy, 1e3},
+      {"kJ/kmol", D::molar_energy, 1.0},
+      {"MJ/kmol", D::molar_energy, 1e3},
+      {"MJ/Nm3", D::molar_energy, 1e6 / nm3, 0.0, n0},
+      {"kWh/Nm3", D::molar_energy, 3.6e6 / nm3, 0.0, n0},
+      {"MJ/Sm3", D::molar_energy, 1e6 / sm3, 0.0, n15},
+      {"Btu/scf", D::molar_energy, kBtuIT_J / scf, 0.0, n60},
+      // mass per amount: molar masses and concentrations per normal volume of gas
+      {"g/mol", D::mass_per_amount, 1e-3},
+      {"kg/kmol", D::mass_per_amount, 1e-3},
+      {"kg/mol", D::mass_per_amount, 1.0},
+      {"mg/Nm3", D::mass_per_amount, 1e-6 / nm3, 0.0, n0},
+      {"ug/Nm3", D::mass_per_amount, 1e-9 / nm3, 0.0, n0},
+      {"g/Nm3", D::mass_per_amount, 1e-3 / nm3, 0.0, n0},
+      {"mg/Sm3", D::mass_per_amount, 1e-6 / sm3, 0.0, n15},
+      {"mg/dscm", D::mass_per_amount, 1e-6 / dscm, 0.0, n20},
+      {"gr/dscf", D::mass_per_amount, kGrain_kg / dscf, 0.0, n20},
+      {"lb/dscf", D::mass_per_amount, kPound_kg / dscf, 0.0, n20},
+  };
+}
+
+const std::vector<UnitDefinition>& table() {
+  static const std::vector<UnitDefinition> units = build_table();
+  return units;
+}
+
+std::string quoted(std::string_view field, std::string_view text) {
+  return std::string(field) + " = \"" + std::string(text) + "\"";
+}
+
+std::string accepted_units(std::initializer_list<Dimension> accepted) {
+  std::string list;
+  for (const Dimension dimension : accepted) {
+    if (dimension == D::dimensionless) {
+      if (!list.empty()) list += ", ";
+      list += "a bare number";
+      continue;
+    }
+    for (const UnitDefinition& unit : table()) {
+      if (unit.dimension == dimension) {
+        if (!list.empty()) list += ", ";
+        list += unit.symbol;
+      }
+    }
+  }
+  return list;
+}
+
+std::string expected_text(std::initializer_list<Dimension> accepted) {
+  std::string text;
+  std::size_t i = 0;
+  for (const Dimension dimension : accepted) {
+    if (i > 0) text += i + 1 == accepted.size() ? " or " : ", ";
+    text += dimension_name(dimension);
+    ++i;
+  }
+  return text;
+}
+
+[[noreturn]] void reject(std::string_view field, std::string_view text, const std::string& problem,
+                         std::initializer_list<Dimension> accepted) {
+  throw InputError(quoted(field, text) + ": " + problem + "; expected " + expected_text(accepted) +
+                   "; accepted units: " + accepted_units(accepted));
+}
+
+std::string_view trim(std::string_view text) {
+  const auto first = text.find_first_not_of(" \t");
+  if (first == std::string_view::npos) return {};
+  const auto last = text.find_last_not_of(" \t");
+  return text.substr(first, last - first + 1);
+}
+
+bool contains(std::initializer_list<Dimension> accepted, Dimension dimension) {
+  return std::find(accepted.begin(), accepted.end(), dimension) != accepted.end();
+}
+
+const UnitDefinition* find_unit(std::string_view symbol) {
+  for (const UnitDefinition& unit : table()) {
+    if (unit.symbol == symbol) return &unit;
+  }
+  return nullptr;
+}
+
+}  // namespace
+
+std::string_view dimension_name(Dimension dimension) {
+  switch (dimension) {
+    case D::dimensionless: return "a plain number";
+    case D::fraction: return "a fraction (% or ppm)";
+    case D::temperature: return "a temperature";
+    case D::temperature_difference: return "a temperature difference";
+    case D::pressure: return "an absolute pressure";
+    case D::mass: return "a mass";
+    case D::amount: return "an amount of gas";
+    case D::energy: return "an energy";
+    case D::power: return "a power (heat input)";
+    case D::time: return "a time";
+    case D::mass_flow: return "a mass flow";
+    case D::molar_flow: return "a molar or normal-volume flow";
+    case D::specific_energy: return "an energy per mass";
+    case D::molar_energy: return "an energy per amount of gas";
+    case D::mass_per_amount: return "a mass per amount of gas";
+  }
+  return "a quantity";
+}
+
+std::span<const UnitDefinition> unit_table() { return table(); }
+
+ParsedQuantity parse_quantity(std::string_view text, std::string_view field,
+                              std::initializer_list<Dimension> accepted) {
+  const std::string_view body = trim(text);
+  if (body.empty()) reject(field, text, "empty", accepted);
+
+  // The number: optional sign, digits, decimal point, exponent. from_chars does not take '+'.
+  std::size_t start = body.front() == '+' ? 1 : 0;
+  double number = 0.0;
+  const auto [end, error] = std::from_chars(body.data() + start, body.data() + body.size(), number);
+  const std::size_t consumed = static_cast<std::size_t>(end - body.data());
+  if (error != std::errc() || consumed == start) {
+    const std::string_view lower = body.substr(start, 3);
+    if (lower == "nan" || lower == "NaN" || lower == "inf" || lower == "Inf") {
+      reject(field, text, "not a finite number", accepted);
+    }
+    reject(field, text, error == std::errc::result_out_of_range ? "the number is out of range" : "no number found",
+           accepted);
+  }
+  if (!std::isfinite(number)) reject(field, text, "not a finite number", accepted);
+
+  const std::string_view symbol = trim(body.substr(consumed));
+  if (symbol.empty()) {
+    if (contains(accepted, D::dimensionless)) return {number, D::dimensionless, nullptr};
+    reject(field, text, "a unit is required", accepted);
+  }
+  const UnitDefinition* unit = find_unit(symbol);
+  if (unit == nullptr) {
+    std::vector<std::string> candidates;
+    for (const Dimension dimension : accepted) {
+      for (const UnitDefinition& u : table()) {
+        if (u.dimension == dimension) candidates.emplace_back(u.symbol);
+      }
+    }
+    std::string problem = "unknown unit \"" + std::string(symbol) + "\"";
+    if (const auto suggestion = nearest_name(symbol, candidates)) problem += " (did you mean \"" + *suggestion + "\"?)";
+    reject(field, text, problem, accepted);
+  }
+  if (!contains(accepted, unit->dimension)) {
+    reject(field, text, "\"" + std::string(symbol) + "\" is " + std::string(dimension_name(unit->dimension)), accepted);
+  }
+  const double si = number * unit->factor_to_si + unit->offset_si;
+  if (unit->dimension == D::temperature && si <= 0.0) {
+    throw InputError(quoted(field, text) + ": at or below absolute zero; a temperature must be above 0 K");
+  }
+  if (unit->dimension == D::pressure && si <= 0.0) {
+    throw InputError(quoted(field, text) + ": an absolute pressure must be above 0 Pa");
+  }
+  return {si, unit->dimension, unit};
+}
+
+Temperature parse_temperature(std::string_view text, std::string_view field) {
+  return kelvin(parse_quantity(text, field, {D::temperature}).value_si);
+}
+
+Pressure parse_pressure(std::string_view text, std::string_view field) {
+  return pascals(parse_quantity(text, field, {D::pressure}).value_si);
+}
+
+double parse_fraction(std::string_view text, std::string_view field) {
+  return parse_quantity(text, field, {D::fraction}).value_si;
+}
+
+Time parse_time(std::string_view text, std::string_view field) {
+  return seconds(parse_quantity(text, field, {D::time}).value_si);
+}
+
+Power parse_power(std::string_view text, std::string_view field) {
+  return watts(parse_quantity(text, field, {D::power}).value_si);
+}
+
+double convert_from_si(double value_si, Dimension dimension, std::string_view unit_symbol) {
+  const UnitDefinition* unit = find_unit(unit_symbol);
+  if (unit == nullptr || unit->dimension != dimension) {
+    throw InputError("unit \"" + std::string(unit_symbol) + "\": not " + std::string(dimension_name(dimension)) +
+                     " unit; accepted units: " + accepted_units({dimension}));
+  }
+  return (value_si - unit->offset_si) / unit->factor_to_si;
+}
+
+std::string format_quantity(double value_si, Dimension dimension, std::string_view unit_symbol, int significant) {
+  const double value = convert_from_si(value_si, dimension, unit_symbol);
+  std::array<char, 64> buffer{};
+  const int digits = std::clamp(significant, 1, 17);
+  const auto result = std::to_chars(buffer.data(), buffer.data() + buffer.size(), value, std::chars_format::general, digits);
+  return std::string(buffer.data(), result.ptr) + " " + std::string(unit_symbol);
+}
+
+}  // namespace stackbound::units
