@@ -1,0 +1,42 @@
+// `stackbound run CASE.yaml [--format text|json|csv|html] [--output FILE]`: the main job.
+
+#include "cases/case_file.hpp"
+#include "cases/commands.hpp"
+#include "cases/run_report.hpp"
+#include "cases/runner.hpp"
+#include "cases/species_file.hpp"
+
+namespace stackbound::cases {
+
+namespace {
+
+struct RunOptionsCli {
+  std::string case_file;
+  std::string format;
+  std::string output;
+};
+
+}  // namespace
+
+void add_run_command(CLI::App& app, const GlobalOptions& global) {
+  auto options = std::make_shared<RunOptionsCli>();
+  CLI::App* command = app.add_subcommand("run", "Run a case file: equilibrium bound, flue gas, emissions on permit bases");
+  command->footer(
+      "Examples:\n"
+      "  stackbound run cases/examples/gas_boiler.yaml\n"
+      "  stackbound run cases/examples/wood_chip_boiler.yaml --format html --output wb1.html\n"
+      "  stackbound run cases/examples/gas_turbine.yaml --format json\n"
+      "The case-file schema is in docs/case-file.md. The CO and NO figures are an equilibrium bound at the\n"
+      "stated firing conditions, not a measurement; permits, regulators, local codes and licensed practice govern.");
+  command->add_option("CASE", options->case_file, "Case file (YAML)")->required();
+  add_format_option(*command, options->format, {"text", "json", "csv", "html"});
+  command->add_option("--output", options->output, "Write to FILE (whole or not at all) instead of stdout");
+  command->callback([options, &global] {
+    const CaseDefinition definition = load_case(options->case_file);
+    const core::SpeciesDatabase database = species_database(global.species_file);
+    const RunResult result = run_case(definition, database);
+    write_output(options->output, render_run(result, options->format));
+  });
+}
+
+}  // namespace stackbound::cases

@@ -1,0 +1,56 @@
+#pragma once
+// The report document: what every front end (run, compare, sweep) fills in and every renderer prints.
+// A renderer turns it into aligned text, CSV, or one self-contained HTML file; JSON is built from the
+// structured results by the caller, with its own stable keys.
+
+#include <string>
+#include <utility>
+#include <vector>
+
+namespace stackbound::emissions {
+
+// A table whose column titles carry their units, e.g. "CO bound [ppmvd @ 3 % O2]".
+struct ReportTable {
+  std::string title;
+  std::vector<std::string> columns;
+  std::vector<std::vector<std::string>> rows;  // each row has columns.size() cells
+  std::vector<std::string> notes;              // printed under the table
+};
+
+// One line series of an x-y plot; x and y have equal lengths.
+struct PlotSeries {
+  std::string name;
+  std::vector<double> x;
+  std::vector<double> y;
+};
+
+struct ReportPlot {
+  std::string title;
+  std::string x_label;  // with unit, e.g. "excess air [%]"
+  std::string y_label;
+  std::vector<PlotSeries> series;
+};
+
+struct Report {
+  std::string title;
+  std::string subtitle;                                     // e.g. what kind of result this is
+  std::vector<std::pair<std::string, std::string>> summary;  // label -> value with unit
+  std::vector<ReportTable> tables;
+  std::vector<ReportPlot> plots;                            // drawn in HTML only
+  std::vector<std::string> flags;                           // findings that need the reader's attention
+  std::vector<std::string> assumptions;
+  std::vector<std::string> cautions;
+};
+
+// Aligned terminal text: summary as "label: value", tables with aligned columns.
+std::string render_text(const Report& report);
+
+// CSV (RFC 4180 quoting): one block per table, a title line, a header line, the rows; summary,
+// flags and cautions as "#"-prefixed comment lines at the top.
+std::string render_csv(const Report& report);
+
+// One self-contained, print-friendly HTML page (inline CSS, inline SVG plots, no scripts, no
+// external resources).
+std::string render_html(const Report& report);
+
+}  // namespace stackbound::emissions

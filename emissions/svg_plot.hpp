@@ -1,0 +1,16 @@
+#pragma once
+// An x-y line plot as inline SVG (no scripts, no external resources), with labelled axes and ticks.
+
+#include <string>
+
+#include "emissions/report.hpp"
+
+namespace stackbound::emissions {
+
+// Series with no finite points are listed in the legend as "(no data)". Returns an <svg> element.
+std::string render_svg_plot(const ReportPlot& plot, int width_px = 640, int height_px = 360);
+
+// Escapes &, <, >, " for HTML/SVG text.
+std::string escape_html(const std::string& text);
+
+}  // namespace stackbound::emissions
