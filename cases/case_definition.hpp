@@ -67,6 +67,7 @@ struct OperatingSpec {
   OperatingMode mode = OperatingMode::excess_air;
   double value = 0.0;                          // excess-air fraction, lambda, phi or O2 fraction
   bool flue_o2_dry = true;
+  std::string location;                        // of the value, for errors found when it is used
 };
 
 struct FiringSpec {
@@ -75,6 +76,7 @@ struct FiringSpec {
   double heat_loss_fraction = 0.0;             // when adiabatic: fraction of the heat input lost
   double pressure_Pa = 101325.0;
   std::vector<std::string> species;            // product candidates; empty = all that fit
+  std::string location;                        // of the temperature (or of the section when adiabatic)
 };
 
 struct MeasuredSpec {
@@ -103,6 +105,7 @@ struct ReportSpec {
   std::vector<std::string> pollutants{"CO", "NO", "NOx"};
   double operating_hours_h = 8760.0;
   std::vector<LimitSpec> limits;
+  std::string reference_o2_location;           // of report.reference_o2 (or the file)
 };
 
 struct CaseDefinition {
@@ -110,6 +113,7 @@ struct CaseDefinition {
   std::string title;
   std::string description;
   std::string plant_type;                       // key of a reference-O2 preset, or empty
+  std::string plant_type_location;
   FuelFeedSpec fuel;
   AirSpec air;
   OperatingSpec operating;

@@ -149,6 +149,7 @@ OperatingSpec operating_spec(const YamlField& op) {
   OperatingSpec spec;
   const std::string kind = op.one_of({"excess_air", "lambda", "equivalence_ratio", "flue_o2"});
   const YamlField value = op.required(kind);
+  spec.location = value.location();
   if (kind == "excess_air") {
     spec.mode = OperatingMode::excess_air;
     spec.value = value.quantity_si(Dimension::fraction);
@@ -163,7 +164,7 @@ OperatingSpec operating_spec(const YamlField& op) {
     if (!(spec.value >= 0.09 && spec.value <= 4.0)) value.fail("must be between 0.09 and 4");
   } else {
     spec.mode = OperatingMode::flue_o2;
-    spec.value = fraction_in(value, 0.0, 0.25, "must be between 0 % and the oxidant's O2 content");
+    spec.value = fraction_in(value, 0.0, 1.0, "must be between 0 % and 100 %");
   }
   if (const auto basis = op.optional("flue_o2_basis")) {
     if (kind != "flue_o2") basis->fail("applies only with flue_o2");
@@ -175,6 +176,7 @@ OperatingSpec operating_spec(const YamlField& op) {
 FiringSpec firing_spec(const YamlField& firing) {
   firing.allow_only({"temperature", "adiabatic", "heat_loss", "pressure", "species"});
   FiringSpec spec;
+  spec.location = firing.location();
   if (const auto adiabatic = firing.optional("adiabatic")) spec.adiabatic = adiabatic->boolean();
   if (spec.adiabatic) {
     if (firing.has("temperature")) firing.fail("give either temperature or adiabatic: true, not both");
@@ -183,6 +185,7 @@ FiringSpec firing_spec(const YamlField& firing) {
     }
   } else {
     spec.temperature_K = temperature_K(firing.required("temperature"));
+    spec.location = firing.required("temperature").location();
     if (firing.has("heat_loss")) firing.required("heat_loss").fail("applies only with adiabatic: true");
   }
   if (const auto p = firing.optional("pressure")) spec.pressure_Pa = pressure_Pa(*p);
@@ -215,6 +218,7 @@ ReportSpec report_spec(const std::optional<YamlField>& report) {
   if (!report) return spec;
   report->allow_only({"reference_o2", "o2_basis", "normal_conditions", "pollutants", "operating_hours", "limits"});
   if (const auto ref = report->optional("reference_o2")) {
+    spec.reference_o2_location = ref->location();
     if (ref->is_scalar() && ref->text() == "preset") {
       spec.reference_o2_fraction.reset();
     } else {
@@ -252,7 +256,10 @@ CaseDefinition parse_case(std::string_view text, const std::string& origin) {
   info.allow_only({"title", "description", "plant_type"});
   definition.title = info.required("title").text();
   if (const auto description = info.optional("description")) definition.description = description->text();
-  if (const auto plant = info.optional("plant_type")) definition.plant_type = plant->text();
+  if (const auto plant = info.optional("plant_type")) {
+    definition.plant_type = plant->text();
+    definition.plant_type_location = plant->location();
+  }
   definition.fuel = fuel_feed(root.required("fuel"));
   definition.air = air_spec(root.optional("air"));
   definition.operating = operating_spec(root.required("operating_point"));

@@ -1,8 +1,6 @@
 #include "cases/cli_support.hpp"
 
-#include <cstdio>
 #include <filesystem>
-#include <fstream>
 #include <iostream>
 
 #include <fmt/format.h>
@@ -11,32 +9,45 @@
 
 namespace stackbound::cases {
 
-void write_output(const std::string& path, std::string_view content) {
-  if (path.empty() || path == "-") {
-    std::cout << content;
+OutputStream::OutputStream(const std::string& path) : path_(path), to_stdout_(path.empty() || path == "-") {
+  if (to_stdout_) return;
+  temporary_ = path_ + ".partial";
+  file_ = std::fopen(temporary_.c_str(), "wb");
+  if (file_ == nullptr) throw units::InputError(fmt::format("--output = \"{}\": cannot write there", path_));
+}
+
+OutputStream::~OutputStream() {
+  if (file_ != nullptr) std::fclose(file_);
+  if (!to_stdout_ && !committed_) std::remove(temporary_.c_str());
+}
+
+void OutputStream::write(std::string_view text) {
+  if (to_stdout_) {
+    std::cout << text;
+    return;
+  }
+  if (std::fwrite(text.data(), 1, text.size(), file_) != text.size()) {
+    throw units::InputError(fmt::format("--output = \"{}\": writing failed", path_));
+  }
+}
+
+void OutputStream::commit() {
+  if (to_stdout_) {
     std::cout.flush();
     return;
   }
-  namespace fs = std::filesystem;
-  const fs::path target(path);
-  const fs::path temporary = target.parent_path() / (target.filename().string() + ".partial");
-  {
-    std::ofstream out(temporary, std::ios::binary | std::ios::trunc);
-    if (!out) throw units::InputError(fmt::format("--output = \"{}\": cannot write there", path));
-    out.write(content.data(), static_cast<std::streamsize>(content.size()));
-    out.close();
-    if (!out) {
-      std::error_code ignored;
-      fs::remove(temporary, ignored);
-      throw units::InputError(fmt::format("--output = \"{}\": writing failed", path));
-    }
-  }
+  const bool closed = std::fclose(file_) == 0;
+  file_ = nullptr;
   std::error_code error;
-  fs::rename(temporary, target, error);
-  if (error) {
-    fs::remove(temporary, error);
-    throw units::InputError(fmt::format("--output = \"{}\": cannot replace the file", path));
-  }
+  if (closed) std::filesystem::rename(temporary_, path_, error);
+  if (!closed || error) throw units::InputError(fmt::format("--output = \"{}\": cannot write the file", path_));
+  committed_ = true;
+}
+
+void write_output(const std::string& path, std::string_view content) {
+  OutputStream out(path);
+  out.write(content);
+  out.commit();
 }
 
 CLI::Option* add_format_option(CLI::App& command, std::string& format, const std::vector<std::string>& accepted) {

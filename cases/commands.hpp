@@ -9,5 +9,11 @@
 namespace stackbound::cases {
 
 void add_species_command(CLI::App& app, const GlobalOptions& global);
+void add_equilibrium_command(CLI::App& app, const GlobalOptions& global);
+void add_run_command(CLI::App& app, const GlobalOptions& global);
+void add_compare_command(CLI::App& app, const GlobalOptions& global);
+void add_sweep_command(CLI::App& app, const GlobalOptions& global);
+void add_convert_command(CLI::App& app, const GlobalOptions& global);
+void add_fuel_command(CLI::App& app, const GlobalOptions& global);
 
 }  // namespace stackbound::cases

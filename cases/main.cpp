@@ -18,11 +18,20 @@ int main(int argc, char** argv) {
   sb::GlobalOptions global;
   app.add_option("--species-file", global.species_file, "Extra species data (YAML, stackbound-species/1 schema)")
       ->check(CLI::ExistingFile);
+  sb::add_run_command(app, global);
   sb::add_species_command(app, global);
+  sb::add_sweep_command(app, global);
+  sb::add_compare_command(app, global);
+  sb::add_equilibrium_command(app, global);
+  sb::add_convert_command(app, global);
+  sb::add_fuel_command(app, global);
   try {
     app.parse(argc, argv);
   } catch (const CLI::ParseError& error) {
     return app.exit(error);
+  } catch (const sb::PartialFailure& error) {
+    std::cerr << "stackbound: " << error.what() << '\n';
+    return 4;
   } catch (const stackbound::units::InputError& error) {
     std::cerr << "stackbound: error: " << error.what() << '\n';
     return 2;

@@ -154,7 +154,7 @@ RunResult run_case(const CaseDefinition& definition, const core::SpeciesDatabase
   const core::Oxidant oxidant = located(definition.origin, [&] { return build_oxidant(definition.air); });
   const core::OperatingPoint op = build_operating_point(definition);
   const core::CombustionResult combustion =
-      located(definition.origin, [&] { return core::burn(fuel, oxidant, op, database); });
+      located(definition.operating.location, [&] { return core::burn(fuel, oxidant, op, database); });
   const core::FuelFeed feed = located(definition.fuel.feed_rate_text.location, [&] {
     return core::resolve_feed(fuel, definition.fuel.feed_rate, core::HeatInputBasis::hhv, "fuel.feed_rate");
   });
@@ -164,12 +164,12 @@ RunResult run_case(const CaseDefinition& definition, const core::SpeciesDatabase
   core::ElementAmounts elements;
   elements.moles = combustion.reactant_element_mol_per_kg;
   const FiringSpec& firing = definition.firing;
-  const core::EquilibriumSolver solver = located(definition.origin, [&] {
+  const core::EquilibriumSolver solver = located(firing.location, [&] {
     return core::EquilibriumSolver(database, elements, firing.species);
   });
   const core::EquilibriumResult* warm =
       options.warm_start != nullptr && options.warm_start->species == solver.species() ? options.warm_start : nullptr;
-  const core::EquilibriumResult equilibrium = located(definition.origin, [&] {
+  const core::EquilibriumResult equilibrium = located(firing.location, [&] {
     if (firing.adiabatic) {
       const double target = combustion.reactant_enthalpy_J_per_kg - firing.heat_loss_fraction * combustion.hhv_J_per_kg;
       return solver.solve_hp(elements, target, firing.pressure_Pa, warm);
@@ -185,13 +185,14 @@ RunResult run_case(const CaseDefinition& definition, const core::SpeciesDatabase
   // Reference O2: the user's value, or the plant type's preset.
   const em::ReferenceO2Preset* preset = nullptr;
   if (!definition.plant_type.empty()) {
-    preset = located(definition.origin, [&] { return &em::reference_o2_preset(definition.plant_type, "case.plant_type"); });
+    preset = located(definition.plant_type_location,
+                     [&] { return &em::reference_o2_preset(definition.plant_type, "case.plant_type"); });
   }
   if (preset == nullptr && !definition.report.reference_o2_fraction) {
     throw units::InputError(fmt::format(
         "{}: report.reference_o2 = \"preset\": needs case.plant_type (a reference-O2 preset key) or an explicit O2, "
         "e.g. reference_o2: 3 %",
-        definition.origin));
+        definition.report.reference_o2_location.empty() ? definition.origin : definition.report.reference_o2_location));
   }
   double reference_o2 = 0.0;
   std::string reference_text;
@@ -263,7 +264,14 @@ RunResult run_case(const CaseDefinition& definition, const core::SpeciesDatabase
         .o2_basis = o2_basis,
         .operating_hours_per_year = definition.report.operating_hours_h,
     };
-    result.pollutants.push_back({name, input.pollutant_wet_fraction, em::evaluate_stack_emission(input)});
+    em::StackEmission emission = em::evaluate_stack_emission(input);
+    if (o2_basis != em::O2Basis::us_epa_20_9) {
+      // Method 19 is written with 20.9 % O2 whatever the O2 basis of the concentration correction.
+      em::ConcentrationContext method19_context = context;
+      method19_context.o2_basis = em::O2Basis::us_epa_20_9;
+      emission.method19 = em::method19_o2_dry(emission.ppmvd, fd, method19_context);
+    }
+    result.pollutants.push_back({name, input.pollutant_wet_fraction, std::move(emission)});
   }
 
   // Limits: a concentration limit (unit of concentration) or a rate limit (kg/h, lb/MMBtu ...).

@@ -2,6 +2,7 @@
 
 #include <algorithm>
 #include <array>
+#include <cctype>
 #include <charconv>
 #include <cmath>
 #include <vector>
@@ -163,8 +164,32 @@ const std::vector<UnitDefinition>& table() {
   return units;
 }
 
+// Control characters (a stray newline from a file, a tab) are shown escaped so that the message
+// stays on one line and shows what was really there.
+std::string printable(std::string_view text) {
+  std::string shown;
+  for (const char c : text) {
+    const auto byte = static_cast<unsigned char>(c);
+    if (c == '\n') {
+      shown += "\\n";
+    } else if (c == '\t') {
+      shown += "\\t";
+    } else if (c == '\r') {
+      shown += "\\r";
+    } else if (byte < 0x20 || byte == 0x7f) {
+      constexpr std::string_view kHex = "0123456789abcdef";
+      shown += "\\x";
+      shown += kHex[byte >> 4];
+      shown += kHex[byte & 0xf];
+    } else {
+      shown += c;
+    }
+  }
+  return shown;
+}
+
 std::string quoted(std::string_view field, std::string_view text) {
-  return std::string(field) + " = \"" + std::string(text) + "\"";
+  return std::string(field) + " = \"" + printable(text) + "\"";
 }
 
 std::string accepted_units(std::initializer_list<Dimension> accepted) {
@@ -202,11 +227,40 @@ std::string expected_text(std::initializer_list<Dimension> accepted) {
                    "; accepted units: " + accepted_units(accepted));
 }
 
+constexpr std::string_view kSpace = " \t\r\n\f\v";
+// Characters that can make up a decimal number ("-1.25e+3"); no unit symbol starts with one of them.
+constexpr std::string_view kNumberCharacters = "0123456789.+-eE";
+constexpr std::string_view kNumberStart = "0123456789.+-";
+constexpr std::string_view kDigits = "0123456789";
+
+// A number for messages, with 6 significant digits: "-26.85".
+std::string fmt_number(double value) {
+  std::array<char, 32> buffer{};
+  const auto result = std::to_chars(buffer.data(), buffer.data() + buffer.size(), value, std::chars_format::general, 6);
+  return std::string(buffer.data(), result.ptr);
+}
+
 std::string_view trim(std::string_view text) {
-  const auto first = text.find_first_not_of(" \t");
+  const auto first = text.find_first_not_of(kSpace);
   if (first == std::string_view::npos) return {};
-  const auto last = text.find_last_not_of(" \t");
+  const auto last = text.find_last_not_of(kSpace);
   return text.substr(first, last - first + 1);
+}
+
+bool starts_with_ignoring_case(std::string_view text, std::string_view prefix) {
+  if (text.size() < prefix.size()) return false;
+  for (std::size_t i = 0; i < prefix.size(); ++i) {
+    if (std::tolower(static_cast<unsigned char>(text[i])) != prefix[i]) return false;
+  }
+  return true;
+}
+
+std::string without_spaces(std::string_view text) {
+  std::string compact;
+  for (const char c : text) {
+    if (kSpace.find(c) == std::string_view::npos) compact += c;
+  }
+  return compact;
 }
 
 bool contains(std::initializer_list<Dimension> accepted, Dimension dimension) {
@@ -248,37 +302,74 @@ std::span<const UnitDefinition> unit_table() { return table(); }
 ParsedQuantity parse_quantity(std::string_view text, std::string_view field,
                               std::initializer_list<Dimension> accepted) {
   const std::string_view body = trim(text);
-  if (body.empty()) reject(field, text, "empty", accepted);
+  if (body.empty()) reject(field, text, "the text is empty", accepted);
 
-  // The number: optional sign, digits, decimal point, exponent. from_chars does not take '+'.
-  std::size_t start = body.front() == '+' ? 1 : 0;
+  // The number is the leading run of number characters; all of it must be one decimal number.
+  const std::string_view unsigned_body = body.substr(body.front() == '+' || body.front() == '-' ? 1 : 0);
+  if (starts_with_ignoring_case(unsigned_body, "nan") || starts_with_ignoring_case(unsigned_body, "inf")) {
+    reject(field, text, "not a finite number", accepted);
+  }
+  const std::string_view token = body.substr(0, std::min(body.find_first_not_of(kNumberCharacters), body.size()));
+  if (token.find_first_of(kDigits) == std::string_view::npos) reject(field, text, "no number found", accepted);
+  if (token.size() < body.size() && body[token.size()] == ',') {
+    const std::string_view with_commas = body.substr(0, body.find_first_not_of("0123456789.+-eE,"));
+    reject(field, text,
+           "malformed number \"" + std::string(with_commas) +
+               "\": write the decimal point as \".\" and no thousands separators",
+           accepted);
+  }
+  const std::string malformed = "malformed number \"" + std::string(token) + "\"";
+  // from_chars takes a leading '-' but not '+', and must not be handed "+-5".
+  const std::size_t start = token.front() == '+' ? 1 : 0;
+  if (start == 1 && token.size() > 1 && (token[1] == '+' || token[1] == '-')) reject(field, text, malformed, accepted);
   double number = 0.0;
-  const auto [end, error] = std::from_chars(body.data() + start, body.data() + body.size(), number);
-  const std::size_t consumed = static_cast<std::size_t>(end - body.data());
-  if (error != std::errc() || consumed == start) {
-    const std::string_view lower = body.substr(start, 3);
-    if (lower == "nan" || lower == "NaN" || lower == "inf" || lower == "Inf") {
-      reject(field, text, "not a finite number", accepted);
-    }
-    reject(field, text, error == std::errc::result_out_of_range ? "the number is out of range" : "no number found",
+  const auto [end, error] = std::from_chars(token.data() + start, token.data() + token.size(), number);
+  if (error == std::errc::invalid_argument || end != token.data() + token.size()) {
+    reject(field, text, malformed, accepted);
+  }
+  if (error == std::errc::result_out_of_range) {
+    reject(field, text,
+           "the number \"" + std::string(token) +
+               "\" is out of range (a magnitude between about 1e-308 and 1e308, or 0, is needed)",
            accepted);
   }
   if (!std::isfinite(number)) reject(field, text, "not a finite number", accepted);
 
-  const std::string_view symbol = trim(body.substr(consumed));
+  // The unit: the rest, one symbol, nothing after it.
+  const std::string_view symbol = trim(body.substr(token.size()));
   if (symbol.empty()) {
     if (contains(accepted, D::dimensionless)) return {number, D::dimensionless, nullptr};
     reject(field, text, "a unit is required", accepted);
   }
   const UnitDefinition* unit = find_unit(symbol);
   if (unit == nullptr) {
+    const std::string_view first_word = symbol.substr(0, std::min(symbol.find_first_of(kSpace), symbol.size()));
+    const std::string_view after_first = trim(symbol.substr(first_word.size()));
+    if (kNumberStart.find(first_word.front()) != std::string_view::npos) {
+      reject(field, text,
+             "found a second number \"" + std::string(first_word) + "\" after \"" + std::string(token) +
+                 "\"; write one number followed by one unit",
+             accepted);
+    }
+    const std::string compact = without_spaces(symbol);
+    if (const UnitDefinition* spaced = find_unit(compact); spaced != nullptr && contains(accepted, spaced->dimension)) {
+      reject(field, text,
+             "unknown unit \"" + printable(symbol) + "\" (did you mean \"" + compact +
+                 "\"? unit symbols are written without spaces)",
+             accepted);
+    }
+    if (!after_first.empty() && find_unit(first_word) != nullptr) {
+      reject(field, text,
+             "unexpected text \"" + printable(after_first) + "\" after the unit \"" + std::string(first_word) + "\"",
+             accepted);
+    }
     std::vector<std::string> candidates;
     for (const Dimension dimension : accepted) {
       for (const UnitDefinition& u : table()) {
         if (u.dimension == dimension) candidates.emplace_back(u.symbol);
       }
     }
-    std::string problem = "unknown unit \"" + std::string(symbol) + "\"";
+    std::string problem = "unknown unit \"" + printable(symbol) + "\"";
     if (const auto suggestion = nearest_name(symbol, candidates)) problem += " (did you mean \"" + *suggestion + "\"?)";
     reject(field, text, problem, accepted);
   }
@@ -286,11 +377,15 @@ ParsedQuantity parse_quantity(std::string_view text, std::string_view field,
     reject(field, text, "\"" + std::string(symbol) + "\" is " + std::string(dimension_name(unit->dimension)), accepted);
   }
   const double si = number * unit->factor_to_si + unit->offset_si;
+  if (!std::isfinite(si)) reject(field, text, "the value is out of range once converted to SI units", accepted);
   if (unit->dimension == D::temperature && si <= 0.0) {
-    throw InputError(quoted(field, text) + ": at or below absolute zero; a temperature must be above 0 K");
+    reject(field, text, fmt_number(si) + " K is at or below absolute zero; a temperature must be above 0 K", accepted);
   }
   if (unit->dimension == D::pressure && si <= 0.0) {
-    throw InputError(quoted(field, text) + ": an absolute pressure must be above 0 Pa");
+    reject(field, text,
+           fmt_number(si) +
+               " Pa is not above 0 Pa; an absolute pressure must be positive (gauge pressures are not accepted)",
+           accepted);
   }
   return {si, unit->dimension, unit};
 }
@@ -328,7 +423,8 @@ std::string format_quantity(double value_si, Dimension dimension, std::string_vi
   const double value = convert_from_si(value_si, dimension, unit_symbol);
   std::array<char, 64> buffer{};
   const int digits = std::clamp(significant, 1, 17);
-  const auto result = std::to_chars(buffer.data(), buffer.data() + buffer.size(), value, std::chars_format::general, digits);
+  const auto result =
+      std::to_chars(buffer.data(), buffer.data() + buffer.size(), value, std::chars_format::general, digits);
   return std::string(buffer.data(), result.ptr) + " " + std::string(unit_symbol);
 }
 

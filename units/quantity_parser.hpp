@@ -2,7 +2,7 @@
 // Text such as "1.2 t/h", "60 degF", "14.7 psia", "850 Nm3/h", "3 %", "2.5 MMBtu/h" parsed into an
 // SI value of the dimension the caller expects. Anything else is an InputError whose message names
 // the field, the text and the units that would have been accepted, e.g.
-//   firing.pressure = "3 kg": expected a pressure; accepted units: Pa, kPa, MPa, bar, mbar, atm, psia, ...
+//   firing.pressure = "3 kg": "kg" is a mass; expected an absolute pressure; accepted units: Pa, hPa, kPa, ...
 //
 // Normal-volume units (Nm3, Sm3, scf, dscf ...) are amounts of gas: "850 Nm3/h" is a molar flow and
 // "38 MJ/Nm3" an energy per mole. Each such unit names its reference conditions (see unit_table()).
@@ -19,7 +19,7 @@ namespace stackbound::units {
 
 enum class Dimension {
   dimensionless,      // "0.85", "1.15" (SI value is the number)
-  fraction,           // "3 %", "350 ppm", "0.03" ; SI value is the fraction (0.03)
+  fraction,           // "3 %", "350 ppm" ; SI value is the fraction (0.03); a bare number is refused
   temperature,        // K, degC, degF, degR ; absolute, SI value in K
   temperature_difference,  // "delta_K" style is not parsed; reserved for printing
   pressure,           // Pa, kPa, MPa, bar, mbar, atm, psia, inHg, mmHg ; SI value in Pa
@@ -57,7 +57,9 @@ struct ParsedQuantity {
 
 // Parses `text` as a number followed by a unit of one of the `accepted` dimensions.
 // A bare number is accepted only where `accepted` holds dimensionless: a fraction needs "%" or "ppm".
-// Throws InputError: '<field> = "<text>": <what is wrong>; accepted units: <list>'.
+// The whole text must be one decimal number (point, not comma) and at most one unit symbol; blanks
+// around them are ignored. Temperatures must be above 0 K and pressures above 0 Pa (absolute).
+// Throws InputError: '<field> = "<text>": <what is wrong>; expected <dimension>; accepted units: <list>'.
 ParsedQuantity parse_quantity(std::string_view text, std::string_view field,
                               std::initializer_list<Dimension> accepted);
 

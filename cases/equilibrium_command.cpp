@@ -1,0 +1,262 @@
+// `stackbound equilibrium --feed "CH4=1, O2=2.4, N2=9.03" (--temperature 1800K | --adiabatic) ...`:
+// chemical equilibrium of a feed of database species at fixed T and P, or at the adiabatic flame
+// temperature (core/equilibrium.hpp, core/adiabatic_flame.hpp).
+
+#include <algorithm>
+#include <memory>
+#include <numeric>
+
+#include <fmt/format.h>
+
+#include <nlohmann/json.hpp>
+
+#include "cases/commands.hpp"
+#include "cases/species_file.hpp"
+#include "core/adiabatic_flame.hpp"
+#include "core/element_amounts.hpp"
+#include "core/equilibrium.hpp"
+#include "units/constants.hpp"
+#include "units/input_error.hpp"
+#include "units/quantity_parser.hpp"
+
+namespace stackbound::cases {
+
+namespace {
+
+constexpr std::string_view kBoundNote =
+    "Chemical-equilibrium values at the stated T and P: an equilibrium bound, not a measurement.";
+// Text output lists species down to this gas mole fraction unless --all is given.
+constexpr double kDefaultListedFraction = 1e-12;
+
+struct EquilibriumOptions {
+  std::string feed;
+  std::string temperature;
+  bool adiabatic = false;
+  std::string feed_temperature;
+  std::string heat_loss;
+  std::string pressure;
+  std::string species;
+  std::string format;
+  std::string output;
+  bool all = false;
+};
+
+// "CH4=1, O2=2.4, N2=9.03" -> species amounts in mol ("CH4=1 kmol" is accepted too).
+std::vector<core::SpeciesAmount> parse_feed(std::string_view text) {
+  std::vector<core::SpeciesAmount> feed;
+  for (const std::string& item : split_list(text, "--feed")) {
+    const std::size_t equals = item.find('=');
+    if (equals == std::string::npos) {
+      throw units::InputError(fmt::format(
+          "--feed = \"{}\": expected NAME=AMOUNT (moles of a database species), e.g. \"CH4=1, O2=2, N2=7.52\"", item));
+    }
+    std::string name = item.substr(0, equals);
+    name.erase(name.find_last_not_of(" \t") + 1);
+    const std::string amount_text = item.substr(equals + 1);
+    if (name.empty()) {
+      throw units::InputError(fmt::format("--feed = \"{}\": the species name before '=' is missing", item));
+    }
+    const std::string field = fmt::format("--feed {}", name);
+    const double moles =
+        units::parse_quantity(amount_text, field, {units::Dimension::dimensionless, units::Dimension::amount}).value_si;
+    if (moles < 0.0) {
+      throw units::InputError(fmt::format("--feed = \"{}\": the amount must be >= 0 mol", item));
+    }
+    feed.push_back({name, moles});
+  }
+  return feed;
+}
+
+// Solver messages name their fields plainly ("species = ..."); on the command line they are options.
+[[noreturn]] void rethrow_as_option(const units::InputError& error) {
+  const std::string message = error.what();
+  for (const char* field : {"species", "temperature", "pressure"}) {
+    if (message.rfind(field, 0) == 0) throw units::InputError("--" + message);
+  }
+  throw error;
+}
+
+std::string feed_text(const std::vector<core::SpeciesAmount>& feed) {
+  std::vector<std::string> parts;
+  for (const core::SpeciesAmount& entry : feed) parts.push_back(fmt::format("{} {:g} mol", entry.formula, entry.moles));
+  return fmt::format("{}", fmt::join(parts, ", "));
+}
+
+std::string text_report(const core::SpeciesDatabase& database, const core::EquilibriumResult& result,
+                        const std::vector<core::SpeciesAmount>& feed, const EquilibriumOptions& options,
+                        double feed_temperature_K) {
+  std::string text;
+  text += fmt::format("Chemical equilibrium of {}\n", feed_text(feed));
+  if (options.adiabatic) {
+    text += fmt::format("Adiabatic flame temperature {:.2f} K (feed at {:.2f} K{})\n", result.temperature_K,
+                        feed_temperature_K,
+                        options.heat_loss.empty() ? "" : fmt::format(", heat loss {}", options.heat_loss));
+  } else {
+    text += fmt::format("Temperature {:.2f} K\n", result.temperature_K);
+  }
+  text += fmt::format("Pressure {:.6g} Pa ({:.6g} atm)\n", result.pressure_Pa,
+                      result.pressure_Pa / units::kStandardAtmosphere_Pa);
+  text += fmt::format("Newton iterations {}, element-balance residual {:.1e}, graphite {}\n", result.iterations,
+                      result.element_residual, result.graphite_present ? "present" : "absent");
+  text += fmt::format("Gas moles {:.6g} mol, products' enthalpy {:.6g} J\n\n", result.total_gas_moles,
+                      result.enthalpy_J);
+
+  std::vector<std::size_t> order(result.species.size());
+  std::iota(order.begin(), order.end(), std::size_t{0});
+  std::stable_sort(order.begin(), order.end(),
+                   [&](std::size_t a, std::size_t b) { return result.moles[a] > result.moles[b]; });
+  std::size_t width = 7;
+  for (const std::string& name : result.species) width = std::max(width, name.size());
+  text += fmt::format("{:<{}}  {:>14}  {:>14}\n", "species", width, "mole fraction", "moles [mol]");
+  std::size_t omitted = 0;
+  for (const std::size_t i : order) {
+    const core::Species* species = database.find(result.species[i]);
+    const bool condensed = species != nullptr && !species->is_gas();
+    if (condensed && result.moles[i] <= 0.0 && !options.all) {
+      ++omitted;
+      continue;
+    }
+    if (!options.all && !condensed && !(result.mole_fractions[i] >= kDefaultListedFraction)) {
+      ++omitted;
+      continue;
+    }
+    if (condensed) {
+      text += fmt::format("{:<{}}  {:>14}  {:>14.6e}\n", result.species[i], width, "(condensed)", result.moles[i]);
+    } else {
+      text += fmt::format("{:<{}}  {:>14.6e}  {:>14.6e}\n", result.species[i], width, result.mole_fractions[i],
+                          result.moles[i]);
+    }
+  }
+  if (omitted > 0) {
+    text += fmt::format("({} products below mole fraction {:.0e} (or absent condensed) not listed; --all lists "
+                        "them)\n",
+                        omitted, kDefaultListedFraction);
+  }
+  text += fmt::format("\nMole fractions are of the gas phase. {}\n", kBoundNote);
+  return text;
+}
+
+nlohmann::json json_report(const core::EquilibriumResult& result, const std::vector<core::SpeciesAmount>& feed,
+                           const EquilibriumOptions& options, double feed_temperature_K) {
+  nlohmann::json fractions = nlohmann::json::object();
+  nlohmann::json moles = nlohmann::json::object();
+  for (std::size_t i = 0; i < result.species.size(); ++i) {
+    fractions[result.species[i]] = result.mole_fractions[i];
+    moles[result.species[i]] = result.moles[i];
+  }
+  nlohmann::json feed_json = nlohmann::json::object();
+  for (const core::SpeciesAmount& entry : feed) {
+    feed_json[entry.formula] = feed_json.value(entry.formula, 0.0) + entry.moles;
+  }
+  nlohmann::json out = {{"mode", options.adiabatic ? "adiabatic" : "fixed_temperature"},
+                        {"temperature_K", result.temperature_K},
+                        {"pressure_Pa", result.pressure_Pa},
+                        {"feed_moles", feed_json},
+                        {"total_moles", result.total_gas_moles},
+                        {"total_moles_basis", "gas phase"},
+                        {"mole_fractions", fractions},
+                        {"mole_fraction_basis", "gas phase (condensed species 0)"},
+                        {"moles", moles},
+                        {"iterations", result.iterations},
+                        {"element_residual", result.element_residual},
+                        {"graphite_present", result.graphite_present},
+                        {"enthalpy_J", result.enthalpy_J},
+                        {"note", kBoundNote}};
+  if (options.adiabatic) {
+    out["feed_temperature_K"] = feed_temperature_K;
+    out["temperature_iterations"] = result.temperature_iterations;
+  }
+  return out;
+}
+
+void run(const EquilibriumOptions& options, const GlobalOptions& global) {
+  const core::SpeciesDatabase database = species_database(global.species_file);
+  const std::vector<core::SpeciesAmount> feed = parse_feed(options.feed);
+  const core::ElementAmounts b = core::element_amounts(database, feed, "--feed");
+  const double pressure_Pa = options.pressure.empty()
+                                 ? units::kStandardAtmosphere_Pa
+                                 : units::parse_pressure(options.pressure, "--pressure").value();
+  if (options.adiabatic && !options.temperature.empty()) {
+    throw units::InputError(fmt::format(
+        "--temperature = \"{}\": give either --temperature (fixed T) or --adiabatic, not both", options.temperature));
+  }
+  if (!options.adiabatic && options.temperature.empty()) {
+    throw units::InputError("--temperature: missing; give --temperature (e.g. 1800K) or --adiabatic");
+  }
+  if (!options.adiabatic && !options.feed_temperature.empty()) {
+    throw units::InputError(fmt::format("--feed-temperature = \"{}\": applies only with --adiabatic",
+                                        options.feed_temperature));
+  }
+  if (!options.adiabatic && !options.heat_loss.empty()) {
+    throw units::InputError(fmt::format("--heat-loss = \"{}\": applies only with --adiabatic", options.heat_loss));
+  }
+  std::vector<std::string> candidates;
+  if (!options.species.empty()) {
+    candidates = split_list(options.species, "--species");
+    for (const std::string& name : candidates) (void)database.at(name, "--species");
+  }
+
+  double feed_temperature_K = units::kReferenceTemperature_K;
+  core::EquilibriumResult result;
+  try {
+    const core::EquilibriumSolver solver(database, b, candidates);
+    if (options.adiabatic) {
+      if (!options.feed_temperature.empty()) {
+        feed_temperature_K = units::parse_temperature(options.feed_temperature, "--feed-temperature").value();
+      }
+      const double loss = options.heat_loss.empty() ? 0.0 : units::parse_fraction(options.heat_loss, "--heat-loss");
+      if (loss < 0.0 || loss >= 1.0) {
+        throw units::InputError(fmt::format("--heat-loss = \"{}\": must be at least 0 % and below 100 %",
+                                            options.heat_loss));
+      }
+      const double enthalpy_J = core::feed_enthalpy_J(database, feed, feed_temperature_K, "--feed-temperature");
+      const double heating_value_J =
+          loss > 0.0 ? core::feed_heating_value_J(database, feed, core::HeatingValueKind::higher, "--feed") : 0.0;
+      result = solver.solve_hp(b, core::hp_target_enthalpy_J(enthalpy_J, loss, heating_value_J), pressure_Pa);
+    } else {
+      const double temperature_K = units::parse_temperature(options.temperature, "--temperature").value();
+      result = solver.solve_tp(b, temperature_K, pressure_Pa);
+    }
+  } catch (const units::InputError& error) {
+    rethrow_as_option(error);
+  }
+  const std::string content = options.format == "json"
+                                  ? json_report(result, feed, options, feed_temperature_K).dump(2) + "\n"
+                                  : text_report(database, result, feed, options, feed_temperature_K);
+  write_output(options.output, content);
+}
+
+}  // namespace
+
+void add_equilibrium_command(CLI::App& app, const GlobalOptions& global) {
+  auto options = std::make_shared<EquilibriumOptions>();
+  CLI::App* command = app.add_subcommand(
+      "equilibrium", "Chemical equilibrium of a species feed at fixed T and P, or at the adiabatic flame temperature");
+  command->footer(
+      "Examples:\n"
+      "  stackbound equilibrium --feed \"CH4=1, O2=2.4, N2=9.03\" --temperature 1800K\n"
+      "  stackbound equilibrium --feed \"CH4=1, O2=2, N2=7.52\" --adiabatic --format json\n"
+      "  stackbound equilibrium --feed \"H2=1, O2=0.5, N2=1.88\" --adiabatic --feed-temperature 600K --pressure 10bar\n"
+      "  stackbound equilibrium --feed \"CO2=1\" --temperature 3000K --species CO2,CO,O2\n"
+      "Amounts are moles of database species (see `stackbound species`); formulas are case-sensitive\n"
+      "(CO2, NO, Ar, C(gr)). Products: every species made of the feed's elements unless --species\n"
+      "restricts them. Results are equilibrium bounds at the stated conditions, not measurements.");
+  command->add_option("--feed", options->feed, "Reactants as NAME=MOLES, comma-separated, e.g. \"CH4=1, O2=2, N2=7.52\"")
+      ->required();
+  command->add_option("--temperature", options->temperature, "Fixed equilibrium temperature with unit, e.g. 1800K, \"1500 degC\"");
+  command->add_flag("--adiabatic", options->adiabatic,
+                    "Solve for the adiabatic flame temperature (products' enthalpy = feed's enthalpy)");
+  command->add_option("--feed-temperature", options->feed_temperature,
+                      "Temperature of the feed for --adiabatic (default 298.15 K)");
+  command->add_option("--heat-loss", options->heat_loss,
+                      "With --adiabatic: heat lost, as a fraction of the feed's higher heating value, e.g. 5%");
+  command->add_option("--pressure", options->pressure, "Absolute pressure with unit (default 1 atm), e.g. 1atm, 5bar");
+  command->add_option("--species", options->species,
+                      "Restrict the products to this comma-separated list, e.g. CO2,CO,O2 (default: all)");
+  command->add_flag("--all", options->all, "Text output: list every product, also below mole fraction 1e-12");
+  add_format_option(*command, options->format, {"text", "json"});
+  command->add_option("--output", options->output, "Write to this file (whole or not at all) instead of stdout");
+  command->callback([options, &global] { run(*options, global); });
+}
+
+}  // namespace stackbound::cases

@@ -1,0 +1,574 @@
+// `stackbound fuel (FILE.yaml | --gas TEXT | --preset NAME | --ultimate TEXT ...)`: a fuel's heating
+// values, stoichiometric air, complete-combustion flue gas (wet and dry), flows, water dew point,
+// F-factors and, with --rate, the flows for a feed. Method notes: docs/fuels.md.
+
+#include <memory>
+#include <optional>
+#include <string>
+#include <vector>
+
+#include <fmt/format.h>
+#include <fmt/ranges.h>
+
+#include <nlohmann/json.hpp>
+
+#include "cases/commands.hpp"
+#include "cases/fuel_file.hpp"
+#include "cases/species_file.hpp"
+#include "core/combustion.hpp"
+#include "core/elements.hpp"
+#include "core/fuel_presets.hpp"
+#include "units/constants.hpp"
+#include "units/input_error.hpp"
+#include "units/normal_conditions.hpp"
+#include "units/quantity_parser.hpp"
+
+namespace stackbound::cases {
+
+namespace {
+
+using units::Dimension;
+
+constexpr std::string_view kCaution =
+    "Caution: these are complete-combustion estimates from the stated fuel, oxidant and operating point, for\n"
+    "screening; they are not measurements and not a compliance determination. Permits, regulators, local\n"
+    "codes and licensed practice govern.";
+
+// The caution as one paragraph (JSON).
+std::string caution_one_line() {
+  std::string text(kCaution);
+  for (char& c : text) {
+    if (c == '\n') c = ' ';
+  }
+  return text;
+}
+
+struct FuelOptions {
+  std::string file;
+  std::string gas;
+  std::string gas_basis = "mole";
+  std::string preset;
+  std::string ultimate;
+  std::string analysis_basis = "as_received";
+  std::string state = "solid";
+  std::string hhv;
+  std::string lhv;
+  std::string estimate;
+  std::string excess_air;
+  std::string lambda;
+  std::string phi;
+  std::string flue_o2;
+  std::string flue_o2_basis = "dry";
+  std::string air_temperature;
+  std::string relative_humidity;
+  std::string ambient_temperature;
+  std::string ambient_pressure;
+  std::string humidity_ratio;
+  std::string o2_enrichment;
+  std::string fuel_temperature;
+  std::string pressure;
+  std::string rate;
+  std::string heat_basis = "hhv";
+  bool list_presets = false;
+  std::string format;
+  std::string output;
+};
+
+// ---------------------------------------------------------------------------------------------------
+// Building the inputs
+
+core::UltimateAnalysis ultimate_from_text(const FuelOptions& o) {
+  core::UltimateAnalysis a;
+  for (const auto& [key, value] : core::parse_composition(o.ultimate, "--ultimate")) {
+    if (key == "C") {
+      a.carbon_percent = value;
+    } else if (key == "H") {
+      a.hydrogen_percent = value;
+    } else if (key == "O") {
+      a.oxygen_percent = value;
+    } else if (key == "N") {
+      a.nitrogen_percent = value;
+    } else if (key == "S") {
+      a.sulfur_percent = value;
+    } else if (key == "ash") {
+      a.ash_percent = value;
+    } else if (key == "moisture") {
+      a.moisture_percent = value;
+    } else {
+      throw units::InputError(fmt::format("--ultimate = \"{}\": unknown component \"{}\"; accepted: C, H, O, N, S, ash, "
+                                          "moisture (mass %; O may be left out to take it by difference)",
+                                          o.ultimate, key));
+    }
+  }
+  a.basis = o.analysis_basis == "dry"            ? core::AnalysisBasis::dry
+            : o.analysis_basis == "dry_ash_free" ? core::AnalysisBasis::dry_ash_free
+                                                 : core::AnalysisBasis::as_received;
+  return a;
+}
+
+struct FuelInput {
+  std::optional<core::Fuel> fuel;
+  std::optional<units::ParsedQuantity> file_rate;
+  std::optional<double> file_temperature_K;
+};
+
+FuelInput build_fuel(const FuelOptions& o, const core::SpeciesDatabase& db) {
+  const int sources = !o.file.empty() + !o.gas.empty() + !o.preset.empty() + !o.ultimate.empty();
+  if (sources != 1) {
+    throw units::InputError(fmt::format("stackbound fuel: give exactly one fuel: FILE.yaml, --gas, --preset or --ultimate "
+                                        "(got {}); see stackbound fuel --help",
+                                        sources));
+  }
+  if (o.ultimate.empty() && (!o.hhv.empty() || !o.lhv.empty() || !o.estimate.empty())) {
+    throw units::InputError("--hhv, --lhv and --estimate go with --ultimate (a gas's heating value is computed from the "
+                            "species data; a file or preset states its own)");
+  }
+  FuelInput input;
+  if (!o.file.empty()) {
+    FuelFile file = read_fuel_file(o.file, db);
+    input.fuel = file.fuel;
+    input.file_rate = file.feed_rate;
+    input.file_temperature_K = file.temperature_K;
+  } else if (!o.preset.empty()) {
+    input.fuel = core::preset_fuel(o.preset, db, "--preset");
+  } else if (!o.gas.empty()) {
+    core::GasFuelSpec spec;
+    spec.name = "gas fuel";
+    spec.composition_percent = core::parse_composition(o.gas, "--gas");
+    spec.basis = o.gas_basis == "mass" ? core::CompositionBasis::mass : core::CompositionBasis::mole;
+    spec.field = "--gas";
+    input.fuel = core::Fuel::gas(spec, db);
+  } else {
+    core::CondensedFuelSpec spec;
+    spec.name = o.state == "liquid" ? "liquid fuel" : "solid fuel";
+    spec.state = o.state == "liquid" ? core::FuelState::liquid : core::FuelState::solid;
+    spec.analysis = ultimate_from_text(o);
+    spec.field = "--ultimate";
+    if (int{!o.hhv.empty()} + int{!o.lhv.empty()} + int{!o.estimate.empty()} > 1) {
+      throw units::InputError("--hhv, --lhv, --estimate: give one of them, not several");
+    }
+    const std::string& measured = o.hhv.empty() ? o.lhv : o.hhv;
+    if (!measured.empty()) {
+      const char* option = o.hhv.empty() ? "--lhv" : "--hhv";
+      spec.heating_value = core::MeasuredHeatingValue{
+          o.hhv.empty() ? core::HeatingValueKind::lower : core::HeatingValueKind::higher,
+          units::parse_quantity(measured, option, {Dimension::specific_energy}).value_si, spec.analysis.basis};
+    } else if (!o.estimate.empty()) {
+      spec.estimate = o.estimate == "boie" ? core::HeatingValueCorrelation::boie
+                                           : core::HeatingValueCorrelation::channiwala_parikh;
+    } else {
+      throw units::InputError("--ultimate: a liquid or solid fuel needs a heating value: --hhv or --lhv (e.g. \"31.4 "
+                              "MJ/kg\", on the --analysis-basis), or --estimate channiwala_parikh|boie");
+    }
+    input.fuel = core::Fuel::condensed(spec, db);
+  }
+  return input;
+}
+
+core::Oxidant build_oxidant(const FuelOptions& o) {
+  core::OxidantOptions options;
+  options.temperature_field = "--air-temperature";
+  options.enrichment_field = "--o2-enrichment";
+  if (!o.air_temperature.empty()) options.temperature = units::parse_temperature(o.air_temperature, "--air-temperature");
+  if (!o.relative_humidity.empty() && !o.humidity_ratio.empty()) {
+    throw units::InputError("--relative-humidity, --humidity-ratio: give one of them, not both");
+  }
+  if (!o.relative_humidity.empty()) {
+    const double rh = units::parse_fraction(o.relative_humidity, "--relative-humidity");
+    const units::Temperature ambient =
+        o.ambient_temperature.empty() ? units::kelvin(288.15)
+                                      : units::parse_temperature(o.ambient_temperature, "--ambient-temperature");
+    const units::Pressure pressure = o.ambient_pressure.empty()
+                                         ? units::pascals(units::kStandardAtmosphere_Pa)
+                                         : units::parse_pressure(o.ambient_pressure, "--ambient-pressure");
+    options.humidity = core::Humidity::relative(rh, ambient, pressure, "--relative-humidity");
+  } else if (!o.ambient_temperature.empty() || !o.ambient_pressure.empty()) {
+    throw units::InputError("--ambient-temperature, --ambient-pressure: they state where --relative-humidity was "
+                            "measured; give --relative-humidity too");
+  }
+  if (!o.humidity_ratio.empty()) {
+    options.humidity = core::Humidity::ratio(
+        units::parse_quantity(o.humidity_ratio, "--humidity-ratio", {Dimension::dimensionless}).value_si,
+        "--humidity-ratio");
+  }
+  if (!o.o2_enrichment.empty()) {
+    options.enriched_o2_fraction = units::parse_fraction(o.o2_enrichment, "--o2-enrichment");
+  }
+  return core::Oxidant(options);
+}
+
+core::OperatingPoint build_operating_point(const FuelOptions& o, std::optional<double> file_temperature_K) {
+  const int given = !o.excess_air.empty() + !o.lambda.empty() + !o.phi.empty() + !o.flue_o2.empty();
+  if (given > 1) {
+    throw units::InputError("--excess-air, --lambda, --phi, --flue-o2: give one of them, not several");
+  }
+  core::OperatingPoint op = core::OperatingPoint::with_excess_air(0.0, "--excess-air");
+  if (!o.excess_air.empty()) {
+    op = core::OperatingPoint::with_excess_air(units::parse_fraction(o.excess_air, "--excess-air"), "--excess-air");
+  } else if (!o.lambda.empty()) {
+    op = core::OperatingPoint::with_air_ratio(
+        units::parse_quantity(o.lambda, "--lambda", {Dimension::dimensionless}).value_si, "--lambda");
+  } else if (!o.phi.empty()) {
+    op = core::OperatingPoint::with_equivalence_ratio(
+        units::parse_quantity(o.phi, "--phi", {Dimension::dimensionless}).value_si, "--phi");
+  } else if (!o.flue_o2.empty()) {
+    op = core::OperatingPoint::with_flue_o2(units::parse_fraction(o.flue_o2, "--flue-o2"),
+                                            o.flue_o2_basis == "wet" ? core::GasBasis::wet : core::GasBasis::dry,
+                                            "--flue-o2");
+  }
+  if (!o.fuel_temperature.empty()) {
+    op.fuel_temperature = units::parse_temperature(o.fuel_temperature, "--fuel-temperature");
+  } else if (file_temperature_K) {
+    op.fuel_temperature = units::kelvin(*file_temperature_K);
+  }
+  op.fuel_temperature_field = "--fuel-temperature";
+  if (!o.pressure.empty()) op.flue_pressure = units::parse_pressure(o.pressure, "--pressure");
+  return op;
+}
+
+std::string operating_point_text(const FuelOptions& o, const core::CombustionResult& r) {
+  std::string how = "stoichiometric (no operating point given)";
+  if (!o.excess_air.empty()) how = fmt::format("given as excess air {}", o.excess_air);
+  if (!o.lambda.empty()) how = fmt::format("given as lambda {}", o.lambda);
+  if (!o.phi.empty()) how = fmt::format("given as phi {}", o.phi);
+  if (!o.flue_o2.empty()) how = fmt::format("solved from flue O2 {} ({})", o.flue_o2, o.flue_o2_basis);
+  return how + fmt::format("; excess air {:.2f} %, lambda {:.4f}, phi {:.4f}", r.excess_air() * 100.0, r.air_ratio,
+                           r.equivalence_ratio());
+}
+
+// ---------------------------------------------------------------------------------------------------
+// Output
+
+double nm3_per_mol() { return units::normal_0C().molar_volume_m3_per_mol(); }
+
+std::string as_fired_text(const core::AsFiredAnalysis& a) {
+  std::string text = fmt::format("C {:.3f} %, H {:.3f} %, O {:.3f} %, N {:.3f} %, S {:.3f} %, ash {:.3f} %, moisture {:.3f} %",
+                                 a.carbon_percent, a.hydrogen_percent, a.oxygen_percent, a.nitrogen_percent,
+                                 a.sulfur_percent, a.ash_percent, a.moisture_percent);
+  if (a.other_percent > 0.0) text += fmt::format(", Ar/He {:.3f} %", a.other_percent);
+  return text + " (mass)";
+}
+
+std::string composition_text(const std::vector<std::pair<std::string, double>>& fractions) {
+  std::string text;
+  for (const auto& [name, x] : fractions) text += fmt::format("{}{} {:.4g} %", text.empty() ? "" : ", ", name, x * 100.0);
+  return text;
+}
+
+std::string line(std::string_view label, const std::string& value) { return fmt::format("  {:<30}{}\n", label, value); }
+
+std::string text_report(const FuelOptions& o, const core::Fuel& fuel, const core::Oxidant& oxidant,
+                        const core::CombustionResult& r, const std::optional<core::CombustionRates>& rates) {
+  const double vn = nm3_per_mol();
+  const double hhv = r.hhv_J_per_kg;
+  std::string t = "stackbound fuel: complete-combustion estimate\n\n";
+
+  t += fmt::format("Fuel: {} ({})\n", fuel.name(), core::to_string(fuel.state()));
+  if (!fuel.source().empty()) t += line("values", fuel.source());
+  if (!fuel.mole_fractions().empty()) t += line("composition (mole)", composition_text(fuel.mole_fractions()));
+  if (const auto m = fuel.molar_mass_kg_per_mol()) t += line("molar mass", fmt::format("{:.4f} g/mol", *m * 1e3));
+  t += line("as fired", as_fired_text(fuel.as_fired_analysis()));
+  std::string hhv_text = fmt::format("{:.4f} MJ/kg  ({:.1f} Btu/lb)", hhv * 1e-6,
+                                     units::convert_from_si(hhv, Dimension::specific_energy, "Btu/lb"));
+  std::string lhv_text = fmt::format("{:.4f} MJ/kg  ({:.1f} Btu/lb)", r.lhv_J_per_kg * 1e-6,
+                                     units::convert_from_si(r.lhv_J_per_kg, Dimension::specific_energy, "Btu/lb"));
+  if (const auto m = fuel.molar_mass_kg_per_mol()) {
+    hhv_text += fmt::format("  {:.4f} MJ/Nm3 (0 degC)  {:.1f} Btu/scf (60 degF)", hhv * *m / vn * 1e-6,
+                            units::convert_from_si(hhv * *m, Dimension::molar_energy, "Btu/scf"));
+    lhv_text += fmt::format("  {:.4f} MJ/Nm3 (0 degC)  {:.1f} Btu/scf (60 degF)", r.lhv_J_per_kg * *m / vn * 1e-6,
+                            units::convert_from_si(r.lhv_J_per_kg * *m, Dimension::molar_energy, "Btu/scf"));
+  }
+  t += line("HHV (gross)", hhv_text);
+  t += line("LHV (net)", lhv_text);
+  t += line("heating values", fuel.heating_value_method());
+  t += line("temperature", fmt::format("{:.2f} K", r.fuel_temperature_K));
+
+  t += fmt::format("\nOxidant: {}\n", oxidant.description());
+  std::vector<std::pair<std::string, double>> ox;
+  for (std::size_t i = 0; i < core::kOxidantSpeciesCount; ++i) {
+    if (oxidant.mole_fractions()[i] > 0.0) ox.emplace_back(core::kOxidantSpeciesNames[i], oxidant.mole_fractions()[i]);
+  }
+  t += line("composition (mole, wet)", composition_text(ox));
+  t += line("dry air", std::string(core::standard_dry_air_source()));
+
+  t += fmt::format("\nOperating point: {}\n", operating_point_text(o, r));
+
+  t += "\nStoichiometry, per kg of fuel\n";
+  t += line("theoretical air (dry)", fmt::format("{:.4f} kg/kg   {:.4f} Nm3/kg", r.stoichiometric_air_kg_per_kg,
+                                                 r.stoichiometric_oxidant_mol_per_kg *
+                                                     (1.0 - oxidant.water_mole_fraction()) * vn));
+  t += line("oxidant supplied (wet)", fmt::format("{:.4f} kg/kg   {:.4f} Nm3/kg   {:.3f} mol/kg", r.oxidant_kg_per_kg,
+                                                  r.oxidant_mol_per_kg * vn, r.oxidant_mol_per_kg));
+  if (r.ash_kg_per_kg > 0.0) t += line("ash", fmt::format("{:.4f} kg/kg", r.ash_kg_per_kg));
+
+  t += "\nFlue gas, complete combustion          wet          dry\n";
+  for (std::size_t i = 0; i < core::kFlueSpeciesCount; ++i) {
+    if (r.flue.mol_per_kg[i] <= 0.0) continue;
+    const auto s = static_cast<core::FlueSpecies>(i);
+    const double dry = r.flue.mole_fraction(s, core::GasBasis::dry);
+    t += fmt::format("  {:<30}{:>9.4f} %  {}\n", core::kFlueSpeciesNames[i],
+                     r.flue.mole_fraction(s, core::GasBasis::wet) * 100.0,
+                     s == core::FlueSpecies::H2O ? std::string("        -") : fmt::format("{:>9.4f} %", dry * 100.0));
+  }
+  const double wet_mol = r.flue.total_mol_per_kg(core::GasBasis::wet);
+  const double dry_mol = r.flue.total_mol_per_kg(core::GasBasis::dry);
+  t += "\nFlue gas flows                         wet          dry\n";
+  t += fmt::format("  {:<30}{:>9.4f}    {:>9.4f}    mol/kg fuel\n", "amount", wet_mol, dry_mol);
+  t += fmt::format("  {:<30}{:>9.4f}    {:>9.4f}    Nm3/kg fuel (0 degC, 101.325 kPa)\n", "normal volume", wet_mol * vn,
+                   dry_mol * vn);
+  t += fmt::format("  {:<30}{:>9.4f}    {:>9.4f}    kg/kg fuel\n", "mass", r.flue.mass_kg_per_kg(core::GasBasis::wet),
+                   r.flue.mass_kg_per_kg(core::GasBasis::dry));
+  t += fmt::format("  {:<30}{:>9.2f}    {:>9.2f}    Nm3/GJ (HHV)\n", "per heat input", wet_mol * vn / hhv * 1e9,
+                   dry_mol * vn / hhv * 1e9);
+  t += fmt::format("  {:<30}{:>9.2f}    {:>9.2f}    kg/GJ (HHV)\n", "", r.flue.mass_kg_per_kg(core::GasBasis::wet) / hhv * 1e9,
+                   r.flue.mass_kg_per_kg(core::GasBasis::dry) / hhv * 1e9);
+
+  t += "\n";
+  t += line("water dew point", r.water_dew_point_K
+                                   ? fmt::format("{:.2f} degC ({:.2f} K) at {:.3f} kPa; saturation pressure IAPWS-IF97",
+                                                 *r.water_dew_point_K - units::kCelsiusOffset_K, *r.water_dew_point_K,
+                                                 r.flue_pressure_Pa * 1e-3)
+                                   : std::string("none (the flue gas holds no water)"));
+  t += "  (the acid dew point of SO3-bearing flue gas is higher and is not computed)\n";
+
+  const core::FFactors& f = r.f_factors;
+  t += "\nF-factors (US EPA Method 19 definitions: stoichiometric, dry air, HHV; gas at 20 degC, 101.325 kPa)\n";
+  t += line("Fd (dry)", fmt::format("{:>8.0f} dscf/MMBtu   {:>7.2f} m3/GJ", f.fd_dscf_per_MMBtu(), f.fd_m3_per_GJ()));
+  t += line("Fw (wet)", fmt::format("{:>8.0f} wscf/MMBtu   {:>7.2f} m3/GJ", f.fw_wscf_per_MMBtu(), f.fw_m3_per_GJ()));
+  t += line("Fc (CO2)", fmt::format("{:>8.0f} scf/MMBtu    {:>7.2f} m3/GJ", f.fc_scf_per_MMBtu(), f.fc_m3_per_GJ()));
+
+  if (rates) {
+    const core::CombustionRates& q = *rates;
+    t += fmt::format("\nFeed: {}\n", q.feed.given);
+    t += line("fuel", fmt::format("{:.6g} kg/h   {:.6g} t/h   {:.6g} lb/h", q.feed.mass_flow_kg_per_s * 3600.0,
+                                  q.feed.mass_flow_kg_per_s * 3.6,
+                                  units::convert_from_si(q.feed.mass_flow_kg_per_s, Dimension::mass_flow, "lb/h")));
+    if (q.feed.molar_flow_mol_per_s) {
+      t += line("fuel gas", fmt::format("{:.6g} Nm3/h (0 degC)   {:.6g} scfh (60 degF)",
+                                        *q.feed.molar_flow_mol_per_s * vn * 3600.0,
+                                        units::convert_from_si(*q.feed.molar_flow_mol_per_s, Dimension::molar_flow, "scfh")));
+    }
+    t += line("heat input (HHV)", fmt::format("{:.6g} MW   {:.6g} MMBtu/h", q.feed.heat_input_hhv_W * 1e-6,
+                                              units::convert_from_si(q.feed.heat_input_hhv_W, Dimension::power, "MMBtu/h")));
+    t += line("heat input (LHV)", fmt::format("{:.6g} MW   {:.6g} MMBtu/h", q.feed.heat_input_lhv_W * 1e-6,
+                                              units::convert_from_si(q.feed.heat_input_lhv_W, Dimension::power, "MMBtu/h")));
+    t += line("oxidant", fmt::format("{:.6g} kg/h   {:.6g} Nm3/h (wet)", q.oxidant_kg_per_s * 3600.0,
+                                     q.oxidant_mol_per_s * vn * 3600.0));
+    t += line("flue gas, wet", fmt::format("{:.6g} Nm3/h   {:.6g} kg/h   {:.6g} scfm (60 degF)",
+                                           q.flue_wet_mol_per_s * vn * 3600.0, q.flue_kg_per_s * 3600.0,
+                                           units::convert_from_si(q.flue_wet_mol_per_s, Dimension::molar_flow, "scfm")));
+    t += line("flue gas, dry", fmt::format("{:.6g} Nm3/h   {:.6g} dscfm (68 degF, EPA)", q.flue_dry_mol_per_s * vn * 3600.0,
+                                           units::convert_from_si(q.flue_dry_mol_per_s, Dimension::molar_flow, "dscfm")));
+    const double co2_molar_mass_kg_per_mol =
+        (core::element_by_symbol("C").atomic_weight_g_per_mol + 2.0 * core::element_by_symbol("O").atomic_weight_g_per_mol) *
+        1e-3;
+    const double co2_kg_per_s = q.flue_mol_per_s[static_cast<std::size_t>(core::FlueSpecies::CO2)] * co2_molar_mass_kg_per_mol;
+    t += line("CO2", fmt::format("{:.6g} kg/h", co2_kg_per_s * 3600.0));
+    if (q.ash_kg_per_s > 0.0) t += line("ash", fmt::format("{:.6g} kg/h", q.ash_kg_per_s * 3600.0));
+  }
+
+  if (!r.warnings.empty()) {
+    t += "\nWarnings\n";
+    for (const std::string& w : r.warnings) t += fmt::format("  - {}\n", w);
+  }
+  t += fmt::format("\n{}\n", kCaution);
+  return t;
+}
+
+nlohmann::json fractions_json(const std::vector<std::pair<std::string, double>>& fractions) {
+  nlohmann::json object = nlohmann::json::object();
+  for (const auto& [name, x] : fractions) object[name] = x;
+  return object;
+}
+
+nlohmann::json json_report(const FuelOptions& o, const core::Fuel& fuel, const core::Oxidant& oxidant,
+                           const core::CombustionResult& r, const std::optional<core::CombustionRates>& rates) {
+  const double vn = nm3_per_mol();
+  const double hhv = r.hhv_J_per_kg;
+  const core::AsFiredAnalysis a = fuel.as_fired_analysis();
+  nlohmann::json fuel_json = {
+      {"name", fuel.name()},
+      {"state", core::to_string(fuel.state())},
+      {"source", fuel.source()},
+      {"heating_value_method", fuel.heating_value_method()},
+      {"temperature_K", r.fuel_temperature_K},
+      {"as_fired_mass_percent",
+       {{"C", a.carbon_percent}, {"H", a.hydrogen_percent}, {"O", a.oxygen_percent}, {"N", a.nitrogen_percent},
+        {"S", a.sulfur_percent}, {"ash", a.ash_percent}, {"moisture", a.moisture_percent}, {"other", a.other_percent}}}};
+  if (!fuel.mole_fractions().empty()) fuel_json["mole_fractions"] = fractions_json(fuel.mole_fractions());
+  if (const auto m = fuel.molar_mass_kg_per_mol()) {
+    fuel_json["molar_mass_g_per_mol"] = *m * 1e3;
+    fuel_json["hhv_MJ_per_Nm3"] = hhv * *m / vn * 1e-6;
+    fuel_json["lhv_MJ_per_Nm3"] = r.lhv_J_per_kg * *m / vn * 1e-6;
+    fuel_json["hhv_Btu_per_scf"] = units::convert_from_si(hhv * *m, Dimension::molar_energy, "Btu/scf");
+  }
+  nlohmann::json oxidant_json = {{"description", oxidant.description()},
+                                 {"temperature_K", oxidant.temperature_K()},
+                                 {"dry_air_source", core::standard_dry_air_source()},
+                                 {"humidity", oxidant.humidity().description()}};
+  for (std::size_t i = 0; i < core::kOxidantSpeciesCount; ++i) {
+    oxidant_json["mole_fractions"][std::string(core::kOxidantSpeciesNames[i])] = oxidant.mole_fractions()[i];
+  }
+  const double wet_mol = r.flue.total_mol_per_kg(core::GasBasis::wet);
+  const double dry_mol = r.flue.total_mol_per_kg(core::GasBasis::dry);
+  nlohmann::json out = {
+      {"fuel", fuel_json},
+      {"oxidant", oxidant_json},
+      {"hhv_MJ_per_kg", hhv * 1e-6},
+      {"lhv_MJ_per_kg", r.lhv_J_per_kg * 1e-6},
+      {"operating_point", operating_point_text(o, r)},
+      {"excess_air_percent", r.excess_air() * 100.0},
+      {"lambda", r.air_ratio},
+      {"phi", r.equivalence_ratio()},
+      {"stoichiometric_air_kg_per_kg", r.stoichiometric_air_kg_per_kg},
+      {"stoichiometric_air_Nm3_per_kg", r.stoichiometric_oxidant_mol_per_kg * (1.0 - oxidant.water_mole_fraction()) * vn},
+      {"oxidant_kg_per_kg", r.oxidant_kg_per_kg},
+      {"oxidant_mol_per_kg", r.oxidant_mol_per_kg},
+      {"flue_gas_wet", fractions_json(r.flue.mole_fractions(core::GasBasis::wet))},
+      {"flue_gas_dry", fractions_json(r.flue.mole_fractions(core::GasBasis::dry))},
+      {"flue_o2_dry", r.flue_o2_dry},
+      {"flue_o2_wet", r.flue_o2_wet},
+      {"flue_co2_dry", r.flue_co2_dry},
+      {"moisture_fraction", r.moisture_fraction},
+      {"flue_gas_mol_per_kg", {{"wet", wet_mol}, {"dry", dry_mol}}},
+      {"flue_gas_Nm3_per_kg", {{"wet", wet_mol * vn}, {"dry", dry_mol * vn}}},
+      {"flue_gas_kg_per_kg",
+       {{"wet", r.flue.mass_kg_per_kg(core::GasBasis::wet)}, {"dry", r.flue.mass_kg_per_kg(core::GasBasis::dry)}}},
+      {"flue_gas_Nm3_per_GJ_hhv", {{"wet", wet_mol * vn / hhv * 1e9}, {"dry", dry_mol * vn / hhv * 1e9}}},
+      {"normal_conditions", units::normal_0C().description},
+      {"water_dew_point_K", r.water_dew_point_K ? nlohmann::json(*r.water_dew_point_K) : nlohmann::json(nullptr)},
+      {"flue_pressure_Pa", r.flue_pressure_Pa},
+      {"Fd_dscf_per_MMBtu", r.f_factors.fd_dscf_per_MMBtu()},
+      {"Fw_wscf_per_MMBtu", r.f_factors.fw_wscf_per_MMBtu()},
+      {"Fc_scf_per_MMBtu", r.f_factors.fc_scf_per_MMBtu()},
+      {"Fd_m3_per_GJ", r.f_factors.fd_m3_per_GJ()},
+      {"Fw_m3_per_GJ", r.f_factors.fw_m3_per_GJ()},
+      {"Fc_m3_per_GJ", r.f_factors.fc_m3_per_GJ()},
+      {"f_factor_conditions", "US EPA Method 19 definitions; 20 degC (68 degF), 101.325 kPa; HHV"},
+      {"warnings", r.warnings},
+      {"caution", caution_one_line()},
+  };
+  if (rates) {
+    const core::CombustionRates& q = *rates;
+    out["feed"] = {{"given", q.feed.given},
+                   {"fuel_kg_per_h", q.feed.mass_flow_kg_per_s * 3600.0},
+                   {"heat_input_hhv_MW", q.feed.heat_input_hhv_W * 1e-6},
+                   {"heat_input_lhv_MW", q.feed.heat_input_lhv_W * 1e-6},
+                   {"oxidant_kg_per_h", q.oxidant_kg_per_s * 3600.0},
+                   {"flue_gas_wet_Nm3_per_h", q.flue_wet_mol_per_s * vn * 3600.0},
+                   {"flue_gas_dry_Nm3_per_h", q.flue_dry_mol_per_s * vn * 3600.0},
+                   {"flue_gas_kg_per_h", q.flue_kg_per_s * 3600.0},
+                   {"ash_kg_per_h", q.ash_kg_per_s * 3600.0}};
+    if (q.feed.molar_flow_mol_per_s) out["feed"]["fuel_Nm3_per_h"] = *q.feed.molar_flow_mol_per_s * vn * 3600.0;
+  }
+  return out;
+}
+
+std::string presets_listing(std::string_view format) {
+  if (format == "json") {
+    nlohmann::json list = nlohmann::json::array();
+    for (const core::FuelPreset& p : core::fuel_presets()) {
+      list.push_back({{"key", p.key}, {"description", p.description}, {"source", p.source}});
+    }
+    return list.dump(2) + "\n";
+  }
+  std::string text = "Fuel presets (typical values for their class, not the analysis of any fuel lot):\n";
+  for (const core::FuelPreset& p : core::fuel_presets()) {
+    text += fmt::format("  {:<20}{}\n  {:<20}source: {}\n", p.key, p.description, "", p.source);
+  }
+  return text;
+}
+
+void run(const FuelOptions& o, const GlobalOptions& global) {
+  if (o.list_presets) {
+    write_output(o.output, presets_listing(o.format));
+    return;
+  }
+  const core::SpeciesDatabase db = species_database(global.species_file);
+  const FuelInput input = build_fuel(o, db);
+  const core::Fuel& fuel = *input.fuel;
+  const core::Oxidant oxidant = build_oxidant(o);
+  const core::OperatingPoint op = build_operating_point(o, input.file_temperature_K);
+  const core::CombustionResult result = core::burn(fuel, oxidant, op, db);
+  const core::HeatInputBasis basis = o.heat_basis == "lhv" ? core::HeatInputBasis::lhv : core::HeatInputBasis::hhv;
+  std::optional<core::CombustionRates> rates;
+  if (!o.rate.empty()) {
+    rates = core::rates(result, core::resolve_feed(fuel, o.rate, basis, "--rate"));
+  } else if (input.file_rate) {
+    rates = core::rates(result, core::resolve_feed(fuel, *input.file_rate, basis, "fuel.feed_rate"));
+  }
+  write_output(o.output, o.format == "json" ? json_report(o, fuel, oxidant, result, rates).dump(2) + "\n"
+                                            : text_report(o, fuel, oxidant, result, rates));
+}
+
+}  // namespace
+
+void add_fuel_command(CLI::App& app, const GlobalOptions& global) {
+  auto o = std::make_shared<FuelOptions>();
+  CLI::App* command = app.add_subcommand(
+      "fuel", "A fuel's heating values, stoichiometric air, complete-combustion flue gas, dew point and F-factors");
+  command->footer(
+      "Examples:\n"
+      "  stackbound fuel --gas \"CH4=93, C2H6=4, CO2=1, N2=2\" --excess-air 15%\n"
+      "  stackbound fuel --preset natural_gas --flue-o2 \"3 %\" --rate \"25 MMBtu/h\"\n"
+      "  stackbound fuel --preset wood_chips --excess-air 50% --relative-humidity 70% --ambient-temperature 10degC\n"
+      "  stackbound fuel --ultimate \"C=75, H=5, O=6.7, N=1.5, S=2.3, ash=9.5, moisture=8\" --analysis-basis dry \\\n"
+      "                  --hhv \"31.4 MJ/kg\" --excess-air 25% --rate \"12 t/h\" --format json\n"
+      "  stackbound fuel my_fuel.yaml --lambda 1.2      (file: a `fuel:` mapping as in a case file)\n"
+      "  stackbound fuel --list-presets\n"
+      "Percentages in --gas and --ultimate are mole % (gas) or mass % and must sum to 100 (within 1 point,\n"
+      "normalised with a warning). With no operating point the fuel is burned stoichiometrically.\n"
+      "Results are complete-combustion estimates for screening; permits, regulators, local codes and licensed\n"
+      "practice govern. Method notes: docs/fuels.md.");
+  command->add_option("FILE", o->file, "Fuel file (YAML with a `fuel:` mapping, keys as in a case file)");
+  command->add_option("--gas", o->gas, "Gas fuel composition, \"CH4=93, C2H6=4, CO2=1, N2=2\" (percent)");
+  command->add_option("--gas-basis", o->gas_basis, "Basis of --gas percentages")
+      ->check(CLI::IsMember({"mole", "mass"}))
+      ->capture_default_str();
+  std::vector<std::string> preset_keys;
+  for (const core::FuelPreset& p : core::fuel_presets()) preset_keys.emplace_back(p.key);
+  command->add_option("--preset", o->preset,
+                      fmt::format("Built-in typical fuel: {} (see --list-presets)", fmt::join(preset_keys, ", ")));
+  command->add_option("--ultimate", o->ultimate,
+                      "Ultimate analysis, mass %: \"C=.., H=.., O=.., N=.., S=.., ash=.., moisture=..\" (O may be "
+                      "left out: by difference)");
+  command->add_option("--analysis-basis", o->analysis_basis,
+                      "Basis of --ultimate and its heating value (dry: moisture as received; dry_ash_free: ash dry, "
+                      "moisture as received)")
+      ->check(CLI::IsMember({"as_received", "dry", "dry_ash_free"}))
+      ->capture_default_str();
+  command->add_option("--state", o->state, "State of an --ultimate fuel")
+      ->check(CLI::IsMember({"solid", "liquid"}))
+      ->capture_default_str();
+  command->add_option("--hhv", o->hhv, "Measured HHV of an --ultimate fuel, e.g. \"31.4 MJ/kg\", \"13500 Btu/lb\"");
+  command->add_option("--lhv", o->lhv, "Measured LHV of an --ultimate fuel, on the analysis basis");
+  command->add_option("--estimate", o->estimate, "Estimate the HHV by a published correlation instead")
+      ->check(CLI::IsMember({"channiwala_parikh", "boie"}));
+  command->add_option("--excess-air", o->excess_air, "Excess air, e.g. 15% (negative: sub-stoichiometric)");
+  command->add_option("--lambda", o->lambda, "Air ratio lambda (actual / stoichiometric air), e.g. 1.15");
+  command->add_option("--phi", o->phi, "Equivalence ratio phi = 1/lambda");
+  command->add_option("--flue-o2", o->flue_o2, "Measured flue O2, e.g. \"3 %\"; the excess air is solved from it");
+  command->add_option("--flue-o2-basis", o->flue_o2_basis, "Basis of --flue-o2")
+      ->check(CLI::IsMember({"dry", "wet"}))
+      ->capture_default_str();
+  command->add_option("--air-temperature", o->air_temperature, "Air temperature at the burner (preheat); default 25 degC");
+  command->add_option("--relative-humidity", o->relative_humidity, "Relative humidity of the ambient air, e.g. 60%");
+  command->add_option("--ambient-temperature", o->ambient_temperature,
+                      "Where the relative humidity was measured; default 15 degC");
+  command->add_option("--ambient-pressure", o->ambient_pressure, "Ambient pressure for the humidity; default 1 atm");
+  command->add_option("--humidity-ratio", o->humidity_ratio, "Instead: kg water per kg dry air, e.g. 0.0085");
+  command->add_option("--o2-enrichment", o->o2_enrichment, "Dry O2 content of the oxidant after adding O2, e.g. 25%");
+  command->add_option("--fuel-temperature", o->fuel_temperature, "Fuel temperature at the burner; default 25 degC");
+  command->add_option("--pressure", o->pressure, "Flue gas pressure for the dew point; default 1 atm");
+  command->add_option("--rate", o->rate,
+                      "Fuel feed: \"1.2 t/h\", \"850 Nm3/h\", \"680 scfm\" (gas), \"25 MW\", \"2.5 MMBtu/h\"");
+  command->add_option("--heat-basis", o->heat_basis, "Heating value a heat-input --rate refers to")
+      ->check(CLI::IsMember({"hhv", "lhv"}))
+      ->capture_default_str();
+  command->add_flag("--list-presets", o->list_presets, "List the fuel presets with their sources");
+  add_format_option(*command, o->format, {"text", "json"});
+  command->add_option("--output", o->output, "Write to this file (whole or not at all) instead of stdout");
+  command->callback([o, &global] { run(*o, global); });
+}
+
+}  // namespace stackbound::cases

@@ -1,0 +1,21 @@
+#pragma once
+// The headline numbers of a run as named columns with units, shared by sweeps and comparisons.
+
+#include <string>
+#include <vector>
+
+#include "cases/runner.hpp"
+
+namespace stackbound::cases {
+
+struct Metric {
+  std::string key;     // stable JSON key, e.g. "CO_mg_per_Nm3_at_ref_o2"
+  std::string header;  // with unit, e.g. "CO bound [mg/Nm3 @ 3 % O2]"
+  double value = 0.0;
+};
+
+// Firing temperature, excess air, flue O2 and moisture, heat input, stack flow, then for each
+// pollutant ppmvd, ppmvd and mg/Nm3 at the reference O2, kg/h and lb/MMBtu.
+std::vector<Metric> run_metrics(const RunResult& result);
+
+}  // namespace stackbound::cases

@@ -1,0 +1,78 @@
+#pragma once
+// Sweeps: the cartesian grid of one or more case parameters, each point a full case run.
+// Points run in order along the grid (the last --vary changes fastest), each warm-started from the
+// previous point of its worker; workers take contiguous slices of fixed-size batches, and the batch
+// is handed to the sink in grid order before the next starts, so memory does not grow with the
+// number of points. A point that fails is reported with its parameters and the sweep goes on.
+
+#include <functional>
+#include <optional>
+#include <string>
+#include <string_view>
+#include <vector>
+
+#include "cases/case_definition.hpp"
+#include "cases/runner.hpp"
+#include "core/species_database.hpp"
+
+namespace stackbound::cases {
+
+enum class SweepParameter {
+  excess_air,
+  flue_o2,
+  firing_temperature,
+  heat_loss,
+  air_preheat,
+  humidity,
+  o2_enrichment,
+  pressure,
+  blend_fraction,
+};
+
+// The parameter names accepted by --vary, in this order.
+std::span<const std::string_view> sweep_parameter_names();
+std::string_view sweep_parameter_name(SweepParameter parameter);
+// Column unit of a parameter's values in outputs: "%", "K" or "kPa".
+std::string_view sweep_parameter_unit(SweepParameter parameter);
+// SI value -> the number printed in that unit.
+double sweep_parameter_display(SweepParameter parameter, double value_si);
+
+struct VarySpec {
+  SweepParameter parameter;
+  std::vector<double> values;  // SI (fractions, K, Pa), evenly spaced from FROM to TO
+  std::string text;            // as given
+};
+
+// Parses "excess_air=5%:45%:9" or "air_preheat=20degC:320degC:7": PARAM=FROM:TO:STEPS, FROM < TO
+// with units, STEPS >= 2 points. Throws units::InputError naming --vary, the text and the rule.
+VarySpec parse_vary(std::string_view text);
+
+// Sets one parameter of a copy of the case; throws units::InputError where the case cannot take it
+// (heat_loss on a case with a stated firing temperature, blend_fraction on a single fuel).
+void apply_parameter(CaseDefinition& definition, SweepParameter parameter, double value_si);
+
+// Checks that every parameter can be applied to the case (before any point runs).
+void check_sweep(const CaseDefinition& definition, const std::vector<VarySpec>& vary);
+
+struct SweepPoint {
+  std::size_t index = 0;
+  std::vector<double> values;          // SI, one per VarySpec
+  std::optional<RunResult> result;     // empty when the point failed
+  std::string error;                   // why it failed
+};
+
+// Number of points of the grid (product of the value counts).
+std::size_t sweep_size(const std::vector<VarySpec>& vary);
+
+struct SweepOptions {
+  unsigned threads = 0;               // 0: all cores
+  std::size_t batch_points = 512;     // points held in memory at once
+  // Called after each batch with the number of points done so far.
+  std::function<void(std::size_t done, std::size_t total)> progress;
+};
+
+// Runs the grid; `sink` receives every point once, in grid order. Returns the number of failed points.
+std::size_t run_sweep(const CaseDefinition& base, const std::vector<VarySpec>& vary, const core::SpeciesDatabase& database,
+                      const std::function<void(const SweepPoint&)>& sink, const SweepOptions& options = {});
+
+}  // namespace stackbound::cases

@@ -1,0 +1,11 @@
+#pragma once
+// Umbrella header of the emissions layer: concentration bases and conversions, O2/CO2 reference
+// correction, emission rates (Method 19 F-factors), reference-O2 presets, limit screening, cautions.
+#include "emissions/basis.hpp"
+#include "emissions/cautions.hpp"
+#include "emissions/concentration.hpp"
+#include "emissions/emission_rate.hpp"
+#include "emissions/limit_screening.hpp"
+#include "emissions/pollutant.hpp"
+#include "emissions/reference_correction.hpp"
+#include "emissions/reference_o2_presets.hpp"

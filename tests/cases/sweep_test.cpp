@@ -1,0 +1,178 @@
+// Sweeps and comparisons: rows equal single runs, physical trends hold, bad specs are refused, and a
+// failing point is reported in its row while the sweep goes on.
+
+#include "cases/sweep.hpp"
+
+#include <algorithm>
+#include <sstream>
+#include <string>
+
+#include <gtest/gtest.h>
+
+#include <nlohmann/json.hpp>
+
+#include "cases/case_file.hpp"
+#include "cases/species_file.hpp"
+#include "tests/support/run_binary.hpp"
+#include "tests/support/tolerance.hpp"
+#include "units/input_error.hpp"
+
+namespace stackbound::cases {
+namespace {
+
+using stackbound::testing::is_close;
+using stackbound::testing::run_stackbound;
+
+std::string example(const char* name) { return std::string(STACKBOUND_SOURCE_DIR) + "/cases/examples/" + name; }
+
+const PollutantBound& bound(const RunResult& run, const std::string& name) {
+  const auto found = std::find_if(run.pollutants.begin(), run.pollutants.end(), [&](const auto& p) { return p.name == name; });
+  if (found == run.pollutants.end()) throw std::runtime_error("no pollutant " + name);
+  return *found;
+}
+
+std::vector<SweepPoint> collect(const CaseDefinition& base, const std::vector<VarySpec>& vary, unsigned threads) {
+  std::vector<SweepPoint> points;
+  SweepOptions options;
+  options.threads = threads;
+  options.batch_points = 4;  // several batches, so warm starts cross batch boundaries
+  run_sweep(base, vary, builtin_species(), [&](const SweepPoint& p) { points.push_back(p); }, options);
+  return points;
+}
+
+// Wrong if a sweep's warm starts, threads or batching changed the numbers, or the grid order were not
+// the documented one (last --vary fastest).
+TEST(Sweep, RowsEqualTheSamePointsRunOneAtATime) {
+  const CaseDefinition base = load_case(example("gas_boiler.yaml"));
+  const std::vector<VarySpec> vary{parse_vary("excess_air=5%:45%:5"), parse_vary("firing_temperature=1600K:1900K:3")};
+  const std::vector<SweepPoint> points = collect(base, vary, 2);
+  ASSERT_EQ(points.size(), 15u);
+  for (std::size_t i = 0; i < points.size(); ++i) {
+    ASSERT_TRUE(points[i].result.has_value()) << points[i].error;
+    EXPECT_EQ(points[i].index, i);
+    EXPECT_TRUE(is_close(points[i].values[0], vary[0].values[i / 3], 0.0));
+    EXPECT_TRUE(is_close(points[i].values[1], vary[1].values[i % 3], 0.0));
+    CaseDefinition single = base;
+    apply_parameter(single, SweepParameter::excess_air, points[i].values[0]);
+    apply_parameter(single, SweepParameter::firing_temperature, points[i].values[1]);
+    const RunResult alone = run_case(single, builtin_species());
+    for (const char* name : {"CO", "NO", "NOx"}) {
+      // Warm and cold starts converge to the same solution within the solver's tolerance.
+      EXPECT_TRUE(is_close(bound(*points[i].result, name).emission.ppmvd_at_reference.value(),
+                           bound(alone, name).emission.ppmvd_at_reference.value(), 1e-8, 1e-12))
+          << name << " at point " << i;
+    }
+  }
+}
+
+// Wrong if the equilibrium NO bound did not rise with firing temperature at fixed excess air:
+// N2 + O2 = 2 NO is endothermic (about +180 kJ/mol), so by van 't Hoff its K grows with T.
+TEST(Sweep, NoBoundRisesWithFiringTemperature) {
+  const CaseDefinition base = load_case(example("gas_boiler.yaml"));
+  const auto points = collect(base, {parse_vary("firing_temperature=1300K:2100K:9")}, 2);
+  for (std::size_t i = 1; i < points.size(); ++i) {
+    EXPECT_GT(bound(*points[i].result, "NO").emission.ppmvd_at_reference.value(),
+              bound(*points[i - 1].result, "NO").emission.ppmvd_at_reference.value())
+        << "between points " << i - 1 << " and " << i;
+  }
+}
+
+// Wrong if the CO bound did not fall as excess air rises at fixed temperature near stoichiometric:
+// more O2 pushes CO + 1/2 O2 = CO2 toward CO2 (x_CO ~ x_CO2 / (K sqrt(x_O2 P))).
+TEST(Sweep, CoBoundFallsAsExcessAirRises) {
+  const CaseDefinition base = load_case(example("gas_boiler.yaml"));
+  const auto points = collect(base, {parse_vary("excess_air=1%:30%:8")}, 1);
+  for (std::size_t i = 1; i < points.size(); ++i) {
+    EXPECT_LT(bound(*points[i].result, "CO").emission.ppmvd_at_reference.value(),
+              bound(*points[i - 1].result, "CO").emission.ppmvd_at_reference.value())
+        << "between points " << i - 1 << " and " << i;
+  }
+}
+
+// Wrong if the adiabatic flame temperature did not peak near phi = 1: leaner mixtures heat excess
+// air, richer ones release less heat; with dissociation the peak sits slightly rich of stoichiometric.
+TEST(Sweep, AdiabaticFlameTemperaturePeaksNearStoichiometric) {
+  CaseDefinition base = load_case(example("gas_boiler.yaml"));
+  base.firing.adiabatic = true;
+  base.firing.heat_loss_fraction = 0.0;
+  const auto points = collect(base, {parse_vary("excess_air=-20%:40%:31")}, 2);
+  std::size_t hottest = 0;
+  for (std::size_t i = 0; i < points.size(); ++i) {
+    ASSERT_TRUE(points[i].result.has_value()) << points[i].error;
+    if (points[i].result->firing_temperature_K > points[hottest].result->firing_temperature_K) hottest = i;
+  }
+  const double excess_air_at_peak = points[hottest].values[0];
+  EXPECT_GE(excess_air_at_peak, -0.10);
+  EXPECT_LE(excess_air_at_peak, 0.02);
+}
+
+// Wrong if a bad --vary spec were accepted or reported without saying what is wrong.
+TEST(Sweep, BadVarySpecsAreRefusedWithTheirRule) {
+  EXPECT_THROW_WITH(parse_vary("excess_ar=5%:45%:9"), units::InputError,
+                    "--vary = \"excess_ar=5%:45%:9\": unknown parameter \"excess_ar\" (did you mean \"excess_air\"?)");
+  EXPECT_THROW_WITH(parse_vary("excess_air=5%:45%:0"), units::InputError, "a range needs 2 or more points");
+  EXPECT_THROW_WITH(parse_vary("excess_air=5%:45%:1"), units::InputError, "a range needs 2 or more points");
+  EXPECT_THROW_WITH(parse_vary("excess_air=45%:5%:9"), units::InputError, "FROM must be below TO (the range is reversed");
+  EXPECT_THROW_WITH(parse_vary("excess_air=5:45:9"), units::InputError, "--vary excess_air FROM = \"5\": a unit is required");
+  EXPECT_THROW_WITH(parse_vary("air_preheat=20%:300%:4"), units::InputError, "is a fraction");
+  EXPECT_THROW_WITH(parse_vary("excess_air=5%:45%"), units::InputError, "expected FROM:TO:STEPS");
+  EXPECT_THROW_WITH(parse_vary("excess_air"), units::InputError, "expected PARAM=FROM:TO:STEPS");
+  EXPECT_THROW_WITH(parse_vary("excess_air=5%:45%:nine"), units::InputError, "STEPS = \"nine\" must be a whole number");
+  const CaseDefinition stated = load_case(example("gas_boiler.yaml"));
+  EXPECT_THROW_WITH(check_sweep(stated, {parse_vary("heat_loss=5%:20%:4")}), units::InputError,
+                    "heat_loss applies only to cases with firing.adiabatic: true");
+  EXPECT_THROW_WITH(check_sweep(stated, {parse_vary("blend_fraction=10%:90%:5")}), units::InputError,
+                    "the case's fuel is not a blend");
+  EXPECT_THROW_WITH(check_sweep(stated, {parse_vary("excess_air=5%:45%:3"), parse_vary("flue_o2=2%:4%:3")}),
+                    units::InputError, "excess_air and flue_o2 both set the operating point");
+}
+
+// Wrong if one failing point stopped the sweep, lost its parameters, or the exit code hid the failure.
+TEST(Sweep, AFailingPointIsReportedInItsRowAndTheSweepGoesOn) {
+  const auto run = run_stackbound({"sweep", example("gas_boiler.yaml"), "--vary", "firing_temperature=3000K:4000K:5"});
+  EXPECT_EQ(run.exit_code, 4) << run.err;
+  EXPECT_NE(run.err.find("2 of 5 sweep points failed"), std::string::npos) << run.err;
+  std::istringstream lines(run.out);
+  std::string line;
+  std::vector<std::string> rows;
+  while (std::getline(lines, line)) {
+    if (!line.empty() && line.front() != '#') rows.push_back(line);
+  }
+  ASSERT_EQ(rows.size(), 6u);  // header + 5 points
+  EXPECT_EQ(rows[0].rfind("point,firing_temperature [K],status,firing temperature [K]", 0), 0u) << rows[0];
+  EXPECT_EQ(rows[1].rfind("1,3000,ok,", 0), 0u) << rows[1];
+  EXPECT_EQ(rows[4].rfind("4,3750,failed,", 0), 0u) << rows[4];
+  EXPECT_NE(rows[4].find("outside the data range"), std::string::npos) << rows[4];
+  EXPECT_EQ(rows[5].rfind("5,4000,failed,", 0), 0u) << rows[5];
+}
+
+// Wrong if the HTML sweep lost its plots' axis units or the bound wording.
+TEST(Sweep, HtmlHasLabelledPlotsAndTheBoundWording) {
+  const auto run = run_stackbound({"sweep", example("gas_boiler.yaml"), "--vary", "excess_air=8%:15%:8", "--format", "html"});
+  ASSERT_EQ(run.exit_code, 0) << run.err;
+  EXPECT_NE(run.out.find("<svg"), std::string::npos);
+  EXPECT_NE(run.out.find("excess_air [%]"), std::string::npos);
+  EXPECT_NE(run.out.find("CO [ppmvd @ 3 % O2]"), std::string::npos);
+  EXPECT_NE(run.out.find("temperature [K]"), std::string::npos);
+  EXPECT_NE(run.out.find("equilibrium bound at the stated firing conditions"), std::string::npos);
+}
+
+// Wrong if compare reported differences that are not value(B) - value(A), or lost a case.
+TEST(Compare, DifferencesAreAgainstTheFirstCase) {
+  const auto run = run_stackbound({"compare", example("gas_boiler.yaml"), example("gas_turbine.yaml"), "--format", "json"});
+  ASSERT_EQ(run.exit_code, 0) << run.err;
+  const nlohmann::json json = nlohmann::json::parse(run.out);
+  ASSERT_EQ(json["cases"].size(), 2u);
+  const auto& a = json["cases"][0];
+  const auto& b = json["cases"][1];
+  for (const auto& [key, value] : b["values"].items()) {
+    const double first = a["values"][key].get<double>();
+    EXPECT_TRUE(is_close(b["difference_from_first"][key]["absolute"].get<double>(), value.get<double>() - first, 1e-12, 1e-12))
+        << key;
+    EXPECT_TRUE(is_close(a["difference_from_first"][key]["absolute"].get<double>(), 0.0, 0.0, 0.0)) << key;
+  }
+  EXPECT_FALSE(json["cautions"].empty());
+}
+
+}  // namespace
+}  // namespace stackbound::cases

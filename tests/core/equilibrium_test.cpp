@@ -1,0 +1,574 @@
+// The TP and HP equilibrium solver (core/equilibrium.hpp, core/adiabatic_flame.hpp) and the feed
+// helpers (core/element_amounts.hpp): properties every solution must have, and bad input.
+// All feeds here are invented test mixtures.
+
+#include "core/equilibrium.hpp"
+
+#include <cmath>
+#include <random>
+#include <string>
+#include <vector>
+
+#include <Eigen/Dense>
+#include <gtest/gtest.h>
+
+#include "cases/species_file.hpp"
+#include "core/adiabatic_flame.hpp"
+#include "core/element_amounts.hpp"
+#include "core/elements.hpp"
+#include "tests/support/tolerance.hpp"
+#include "units/constants.hpp"
+#include "units/input_error.hpp"
+
+namespace stackbound::core {
+namespace {
+
+using stackbound::testing::is_close;
+
+constexpr double kAtm_Pa = units::kStandardAtmosphere_Pa;
+constexpr double kR = units::kGasConstant_J_per_mol_K;
+// The tool promises element balances to 1e-10 relative (issue 3).
+constexpr double kElementBalance = 1e-10;
+
+const SpeciesDatabase& db() { return cases::builtin_species(); }
+
+// Methane with dry air (O2 + 3.76 N2) at equivalence ratio phi: an invented test feed.
+std::vector<SpeciesAmount> methane_air(double phi) {
+  const double o2 = 2.0 / phi;
+  return {{"CH4", 1.0}, {"O2", o2}, {"N2", 3.76 * o2}};
+}
+
+struct Solved {
+  ElementAmounts b;
+  EquilibriumResult result;
+};
+
+Solved solve(const std::vector<SpeciesAmount>& feed, double T, double P = kAtm_Pa,
+             std::vector<std::string> candidates = {}) {
+  const ElementAmounts b = element_amounts(db(), feed);
+  const EquilibriumSolver solver(db(), b, std::move(candidates));
+  return {b, solver.solve_tp(b, T, P)};
+}
+
+// Element totals of the result, recomputed from the species' compositions (independent of the solver).
+ElementAmounts product_elements(const EquilibriumResult& result) {
+  ElementAmounts totals;
+  for (std::size_t i = 0; i < result.species.size(); ++i) totals.add_species(db().at(result.species[i]), result.moles[i]);
+  return totals;
+}
+
+double worst_element_miss(const ElementAmounts& feed, const EquilibriumResult& result) {
+  const ElementAmounts products = product_elements(result);
+  double worst = 0.0;
+  for (std::size_t k = 0; k < kElementCount; ++k) {
+    if (feed.moles[k] > 0.0) worst = std::max(worst, std::abs(products.moles[k] - feed.moles[k]) / feed.moles[k]);
+  }
+  return worst;
+}
+
+// Dimensionless Gibbs energy G/RT of a composition at T, P from the species data (1 bar standard
+// state): sum_gas n_j (g_j/RT + ln(n_j/n) + ln(P/1 bar)) + sum_condensed n_c g_c/RT.
+double gibbs_over_RT(const std::vector<std::string>& species, const std::vector<double>& moles, double T, double P) {
+  double gas = 0.0;
+  for (std::size_t i = 0; i < species.size(); ++i) {
+    if (db().at(species[i]).is_gas()) gas += moles[i];
+  }
+  double G = 0.0;
+  for (std::size_t i = 0; i < species.size(); ++i) {
+    if (moles[i] <= 0.0) continue;
+    const Species& s = db().at(species[i]);
+    G += moles[i] * s.g_over_RT(T);
+    if (s.is_gas()) G += moles[i] * (std::log(moles[i] / gas) + std::log(P / units::kStandardStatePressure_Pa));
+  }
+  return G;
+}
+
+// Directions that keep every element balance: the null space of the formula matrix over the
+// species with a non-negligible amount (only those can be perturbed both ways).
+Eigen::MatrixXd balance_preserving_directions(const EquilibriumResult& result, std::vector<std::size_t>& perturbed) {
+  perturbed.clear();
+  double gas = result.total_gas_moles;
+  for (std::size_t i = 0; i < result.species.size(); ++i) {
+    if (result.moles[i] > 1e-9 * gas) perturbed.push_back(i);
+  }
+  Eigen::MatrixXd formula(static_cast<Eigen::Index>(kElementCount), static_cast<Eigen::Index>(perturbed.size()));
+  for (std::size_t c = 0; c < perturbed.size(); ++c) {
+    const Species& s = db().at(result.species[perturbed[c]]);
+    for (std::size_t k = 0; k < kElementCount; ++k) {
+      formula(static_cast<Eigen::Index>(k), static_cast<Eigen::Index>(c)) = s.atoms_of(known_elements()[k].symbol);
+    }
+  }
+  return Eigen::FullPivLU<Eigen::MatrixXd>(formula).kernel();
+}
+
+// Largest first-order decrease of G/RT over random balance-preserving perturbations of relative size
+// `step` (each species changes by at most step x its amount). <= 0 means no perturbation lowers G.
+double largest_gibbs_decrease(const EquilibriumResult& result, const std::vector<double>& moles, double step) {
+  std::vector<std::size_t> perturbed;
+  const Eigen::MatrixXd kernel = balance_preserving_directions(result, perturbed);
+  const double T = result.temperature_K;
+  const double P = result.pressure_Pa;
+  const double G0 = gibbs_over_RT(result.species, moles, T, P);
+  std::mt19937 random(12345);
+  std::normal_distribution<double> normal(0.0, 1.0);
+  double worst = -std::numeric_limits<double>::infinity();
+  for (int trial = 0; trial < 200 && kernel.cols() > 0; ++trial) {
+    Eigen::VectorXd weights(kernel.cols());
+    for (Eigen::Index c = 0; c < kernel.cols(); ++c) weights[c] = normal(random);
+    const Eigen::VectorXd direction = kernel * weights;
+    double scale = std::numeric_limits<double>::infinity();
+    for (std::size_t c = 0; c < perturbed.size(); ++c) {
+      const double d = std::abs(direction[static_cast<Eigen::Index>(c)]);
+      if (d > 0.0) scale = std::min(scale, step * moles[perturbed[c]] / d);
+    }
+    for (const double sign : {1.0, -1.0}) {
+      std::vector<double> trial_moles = moles;
+      for (std::size_t c = 0; c < perturbed.size(); ++c) {
+        trial_moles[perturbed[c]] += sign * scale * direction[static_cast<Eigen::Index>(c)];
+      }
+      worst = std::max(worst, G0 - gibbs_over_RT(result.species, trial_moles, T, P));
+    }
+  }
+  return worst;
+}
+
+// ---------------------------------------------------------------------------------------------------
+// Feed helpers
+
+// Wrong if atoms per molecule were miscounted or amounts not scaled by the moles fed.
+TEST(ElementAmounts, CountsTheAtomsOfEveryFeedSpecies) {
+  const std::vector<SpeciesAmount> feed{{"CH4", 1.0}, {"O2", 2.5}, {"N2", 9.4}, {"Ar", 0.1}, {"H2S", 0.02}};
+  const ElementAmounts b = element_amounts(db(), feed);
+  EXPECT_TRUE(is_close(b.of("C"), 1.0, 1e-15));
+  EXPECT_TRUE(is_close(b.of("H"), 4.04, 1e-15));
+  EXPECT_TRUE(is_close(b.of("O"), 5.0, 1e-15));
+  EXPECT_TRUE(is_close(b.of("N"), 18.8, 1e-15));
+  EXPECT_TRUE(is_close(b.of("S"), 0.02, 1e-15));
+  EXPECT_TRUE(is_close(b.of("Ar"), 0.1, 1e-15));
+  EXPECT_TRUE(is_close(b.of("He"), 0.0, 0.0, 0.0));
+  EXPECT_TRUE(is_close(b.total(), 1.0 + 4.04 + 5.0 + 18.8 + 0.02 + 0.1, 1e-15));
+  EXPECT_EQ(b.present(), (std::vector<std::string>{"C", "H", "O", "N", "S", "Ar"}));
+}
+
+// Wrong if a bad feed were accepted silently (unknown name, negative or missing amounts).
+TEST(ElementAmounts, RejectsUnknownNegativeAndEmptyFeeds) {
+  const std::vector<SpeciesAmount> unknown{{"CH5", 1.0}};
+  EXPECT_THROW_WITH((void)element_amounts(db(), unknown, "--feed"), units::InputError,
+                    "--feed = \"CH5\": unknown species");
+  const std::vector<SpeciesAmount> negative{{"CH4", -1.0}};
+  EXPECT_THROW_WITH((void)element_amounts(db(), negative), units::InputError,
+                    "feed = \"CH4=-1\": the amount must be a finite number >= 0 mol");
+  const std::vector<SpeciesAmount> not_a_number{{"CH4", std::nan("")}};
+  EXPECT_THROW_WITH((void)element_amounts(db(), not_a_number), units::InputError, "must be a finite number");
+  const std::vector<SpeciesAmount> empty;
+  EXPECT_THROW_WITH((void)element_amounts(db(), empty), units::InputError, "feed: the feed is empty");
+  const std::vector<SpeciesAmount> zero{{"CH4", 0.0}, {"O2", 0.0}};
+  EXPECT_THROW_WITH((void)element_amounts(db(), zero), units::InputError, "feed: every amount is zero");
+}
+
+// Wrong if the feed enthalpy missed the formation enthalpies or used the wrong temperature.
+TEST(FeedEnthalpy, IsTheSumOfTheSpeciesEnthalpiesAtTheFeedTemperature) {
+  const std::vector<SpeciesAmount> feed{{"CH4", 1.0}, {"O2", 2.0}, {"N2", 7.52}};
+  for (const double T : {298.15, 700.0}) {
+    const double expected = 1.0 * db().at("CH4").enthalpy(units::kelvin(T)).value() +
+                            2.0 * db().at("O2").enthalpy(units::kelvin(T)).value() +
+                            7.52 * db().at("N2").enthalpy(units::kelvin(T)).value();
+    EXPECT_TRUE(is_close(feed_enthalpy_J(db(), feed, T), expected, 1e-13)) << T;
+  }
+  EXPECT_THROW_WITH((void)feed_enthalpy_J(db(), feed, 4000.0), units::InputError,
+                    "feed temperature = 4000 K: outside the data range 200-3500 K of CH4");
+}
+
+// ---------------------------------------------------------------------------------------------------
+// Construction
+
+// Wrong if products with foreign elements were offered, or graphite were missing from carbon feeds.
+TEST(EquilibriumSolver, DefaultProductsAreEverySpeciesOfTheFeedsElementsGasesFirst) {
+  const ElementAmounts b = element_amounts(db(), methane_air(1.0));
+  const EquilibriumSolver solver(db(), b);
+  const std::vector<std::string>& names = solver.species();
+  for (const std::string& name : names) {
+    EXPECT_EQ(db().at(name).atoms_of("S"), 0.0) << name;
+    EXPECT_EQ(db().at(name).atoms_of("Ar"), 0.0) << name;
+  }
+  EXPECT_NE(std::find(names.begin(), names.end(), "NO"), names.end());
+  ASSERT_FALSE(names.empty());
+  EXPECT_EQ(names.back(), "C(gr)");
+  EXPECT_EQ(static_cast<std::size_t>(std::count_if(names.begin(), names.end(),
+                                                    [](const std::string& n) { return !db().at(n).is_gas(); })),
+            1u);
+  EXPECT_TRUE(is_close(solver.max_temperature_K(), 3500.0, 1e-15));
+}
+
+// Wrong if a product list that cannot hold the feed were accepted and failed later, or silently.
+TEST(EquilibriumSolver, RejectsProductListsThatCannotHoldTheFeed) {
+  const ElementAmounts b = element_amounts(db(), methane_air(1.0));
+  EXPECT_THROW_WITH(EquilibriumSolver(db(), b, {"CO2", "H2O", "N2", "Xx"}), units::InputError,
+                    "species = \"Xx\": unknown species");
+  EXPECT_THROW_WITH(EquilibriumSolver(db(), b, {"CO2", "H2O", "O2"}), units::InputError,
+                    "no product contains N, which is in the feed");
+  EXPECT_THROW_WITH(EquilibriumSolver(db(), b, {"CO2", "H2O", "N2", "SO2"}), units::InputError,
+                    "species = \"SO2\": contains S, which is not in the feed");
+  EXPECT_THROW_WITH(EquilibriumSolver(db(), b, {"CO2", "H2O", "N2", "CO2"}), units::InputError,
+                    "species = \"CO2\": listed twice");
+  EXPECT_THROW_WITH(EquilibriumSolver(db(), element_amounts(db(), std::vector<SpeciesAmount>{{"C(gr)", 1.0}}),
+                                      {"C(gr)"}),
+                    units::InputError, "needs at least one gas species");
+}
+
+// Wrong if proportions the products cannot reach were answered with a wrong composition.
+TEST(EquilibriumSolver, RejectsElementProportionsTheProductsCannotReach) {
+  // CO fed, only CO2 and O2 allowed: C/O = 1/1 needs a negative amount of O2.
+  const ElementAmounts co = element_amounts(db(), std::vector<SpeciesAmount>{{"CO", 1.0}});
+  const EquilibriumSolver independent(db(), co, {"CO2", "O2"});
+  EXPECT_THROW_WITH((void)independent.solve_tp(co, 2000.0, kAtm_Pa), units::InputError,
+                    "cannot hold the feed's elements in its proportions");
+  // Only CO allowed: its C and O rows are dependent; CO2 fed cannot be held.
+  const ElementAmounts co2 = element_amounts(db(), std::vector<SpeciesAmount>{{"CO2", 1.0}});
+  const EquilibriumSolver dependent(db(), co2, {"CO"});
+  EXPECT_THROW_WITH((void)dependent.solve_tp(co2, 2000.0, kAtm_Pa), units::InputError,
+                    "cannot hold the feed's elements in its proportions");
+}
+
+// Wrong if dependent balance rows (one product for two elements) made the Newton matrix singular.
+TEST(EquilibriumSolver, SolvesAProductListWithDependentElementRows) {
+  const Solved s = solve({{"CO2", 2.0}}, 1500.0, kAtm_Pa, {"CO2"});
+  EXPECT_TRUE(is_close(s.result.moles_of("CO2"), 2.0, 1e-12));
+  EXPECT_TRUE(is_close(s.result.mole_fraction("CO2"), 1.0, 1e-15));
+  EXPECT_LE(s.result.element_residual, kElementBalance);
+}
+
+// ---------------------------------------------------------------------------------------------------
+// Properties at every solution
+
+struct Condition {
+  double phi;
+  double temperature_K;
+  double pressure_atm;
+};
+const Condition kConditions[] = {{0.1, 300.0, 1.0},   {0.5, 1200.0, 0.01}, {1.0, 2200.0, 1.0},
+                                 {1.0, 3400.0, 100.0}, {1.5, 1800.0, 10.0}, {3.0, 900.0, 1.0},
+                                 {4.0, 2500.0, 0.01},  {0.8, 1500.0, 30.0}};
+
+// Wrong if atoms were created or lost: the balances must hold to 1e-10 relative per element.
+TEST(Equilibrium, ElementBalancesHoldToOnePartIn1e10) {
+  for (const Condition& c : kConditions) {
+    const Solved s = solve(methane_air(c.phi), c.temperature_K, c.pressure_atm * kAtm_Pa);
+    EXPECT_LE(worst_element_miss(s.b, s.result), kElementBalance) << c.phi << " " << c.temperature_K;
+    EXPECT_LE(s.result.element_residual, kElementBalance);
+    // The reported residual is the one recomputed here (to rounding).
+    EXPECT_NEAR(s.result.element_residual, worst_element_miss(s.b, s.result), 1e-14);
+  }
+}
+
+// Wrong if the gas mole fractions did not sum to 1, or any amount were negative or not a number.
+TEST(Equilibrium, MoleFractionsAreNonNegativeAndSumToOne) {
+  for (const Condition& c : kConditions) {
+    const Solved s = solve(methane_air(c.phi), c.temperature_K, c.pressure_atm * kAtm_Pa);
+    double sum = 0.0;
+    double gas_moles = 0.0;
+    for (std::size_t i = 0; i < s.result.species.size(); ++i) {
+      EXPECT_TRUE(std::isfinite(s.result.moles[i]) && s.result.moles[i] >= 0.0) << s.result.species[i];
+      EXPECT_TRUE(std::isfinite(s.result.mole_fractions[i]) && s.result.mole_fractions[i] >= 0.0);
+      sum += s.result.mole_fractions[i];
+      if (db().at(s.result.species[i]).is_gas()) {
+        gas_moles += s.result.moles[i];
+      } else {
+        EXPECT_EQ(s.result.mole_fractions[i], 0.0) << "condensed species have no gas mole fraction";
+      }
+    }
+    EXPECT_TRUE(is_close(sum, 1.0, 1e-14));
+    EXPECT_TRUE(is_close(s.result.total_gas_moles, gas_moles, 1e-14));
+  }
+}
+
+// Wrong if the solution were not the Gibbs minimum: some small feasible change would lower G.
+TEST(Equilibrium, NoSmallFeasiblePerturbationLowersTheGibbsEnergy) {
+  for (const Condition& c : kConditions) {
+    const Solved s = solve(methane_air(c.phi), c.temperature_K, c.pressure_atm * kAtm_Pa);
+    const double G = gibbs_over_RT(s.result.species, s.result.moles, c.temperature_K, c.pressure_atm * kAtm_Pa);
+    // At the minimum G rises by O(step^2); the allowance is rounding of G itself.
+    EXPECT_LE(largest_gibbs_decrease(s.result, s.result.moles, 1e-4), 1e-13 * std::abs(G) + 1e-12)
+        << c.phi << " " << c.temperature_K;
+  }
+}
+
+// Wrong if the perturbation test above could not detect a non-minimum: a composition moved 1 % away
+// along the water-gas shift must be lowered by some perturbation.
+TEST(Equilibrium, ThePerturbationTestDetectsANonEquilibriumComposition) {
+  const Solved s = solve(methane_air(1.2), 1600.0);
+  std::vector<double> shifted = s.result.moles;
+  const double extent = 0.01 * s.result.moles_of("CO");
+  shifted[s.result.index_of("CO")] -= extent;  // CO + H2O -> CO2 + H2
+  shifted[s.result.index_of("H2O")] -= extent;
+  shifted[s.result.index_of("CO2")] += extent;
+  shifted[s.result.index_of("H2")] += extent;
+  EXPECT_GT(largest_gibbs_decrease(s.result, shifted, 1e-3), 1e-9);
+}
+
+// Wrong if the answer depended on how the same element totals were fed.
+TEST(Equilibrium, SameElementTotalsGiveTheSameResultHoweverFed) {
+  const Solved burned = solve({{"CH4", 1.0}, {"O2", 2.0}, {"N2", 7.52}}, 2100.0);
+  const Solved products = solve({{"CO2", 1.0}, {"H2O", 2.0}, {"N2", 7.52}}, 2100.0);
+  ASSERT_EQ(burned.result.species, products.result.species);
+  for (std::size_t i = 0; i < burned.result.species.size(); ++i) {
+    EXPECT_TRUE(is_close(burned.result.moles[i], products.result.moles[i], 1e-9, 1e-300))
+        << burned.result.species[i];
+  }
+}
+
+// Wrong if graphite were missed in rich cold mixtures or kept where it is not stable. Its
+// chemical-potential test (Gordon & McBride, NASA RP-1311, sec. 3.4): present => mu_C(gr)/RT = pi_C;
+// absent => g_C(gr)/RT - pi_C >= 0.
+TEST(Equilibrium, GraphiteAppearsExactlyWhenItsChemicalPotentialTestSaysSo) {
+  const Species& graphite = db().at("C(gr)");
+  const std::size_t carbon = element_index("C");
+  int present = 0;
+  int absent = 0;
+  for (const double phi : {0.8, 1.0, 1.5, 2.0, 2.5, 3.0, 4.0}) {
+    for (const double T : {700.0, 1000.0, 1400.0, 2000.0}) {
+      const Solved s = solve(methane_air(phi), T);
+      const double affinity = graphite.g_over_RT(T) - s.result.element_potentials[carbon];
+      if (s.result.graphite_present) {
+        ++present;
+        EXPECT_GT(s.result.moles_of("C(gr)"), 0.0);
+        EXPECT_NEAR(affinity, 0.0, 1e-9) << phi << " " << T;
+      } else {
+        ++absent;
+        EXPECT_EQ(s.result.moles_of("C(gr)"), 0.0);
+        EXPECT_GE(affinity, -1e-9) << phi << " " << T;
+      }
+    }
+  }
+  // Both regimes were exercised.
+  EXPECT_GT(present, 3);
+  EXPECT_GT(absent, 3);
+  EXPECT_TRUE(solve(methane_air(3.0), 1000.0).result.graphite_present);
+  EXPECT_FALSE(solve(methane_air(1.0), 1000.0).result.graphite_present);
+}
+
+// Wrong if trace species underflowed or were not at their own equilibrium: every gas species,
+// however scarce, must satisfy ln x_j = -g_j/RT - ln(P/P0) + sum_k a_kj pi_k.
+TEST(Equilibrium, TraceSpeciesFarBelowOnePartIn1e30AreExactAndPositive) {
+  const Solved s = solve(methane_air(0.5), 800.0);
+  int deep_traces = 0;
+  for (std::size_t i = 0; i < s.result.species.size(); ++i) {
+    const Species& species = db().at(s.result.species[i]);
+    if (!species.is_gas()) continue;
+    double ln_x = -species.g_over_RT(800.0) - std::log(kAtm_Pa / units::kStandardStatePressure_Pa);
+    for (std::size_t k = 0; k < kElementCount; ++k) {
+      ln_x += species.atoms_of(known_elements()[k].symbol) * s.result.element_potentials[k];
+    }
+    const double x = s.result.mole_fractions[i];
+    if (ln_x > -700.0) {
+      ASSERT_GT(x, 0.0) << species.formula();
+      EXPECT_TRUE(is_close(std::log(x), ln_x, 1e-9, 1e-9)) << species.formula();
+    }
+    if (x > 0.0 && x < 1e-30) ++deep_traces;
+  }
+  EXPECT_GE(deep_traces, 3);  // e.g. N, H, C2H2 at 800 K
+}
+
+// Wrong if inert-only feeds (one species per element) broke the Newton system.
+TEST(Equilibrium, InertOnlyFeedsKeepTheirComposition) {
+  const Solved helium = solve({{"He", 2.0}}, 1000.0);
+  EXPECT_TRUE(is_close(helium.result.mole_fraction("He"), 1.0, 1e-15));
+  EXPECT_TRUE(is_close(helium.result.moles_of("He"), 2.0, 1e-12));
+  const Solved mixture = solve({{"He", 1.0}, {"Ar", 3.0}}, 500.0, 3.0 * kAtm_Pa);
+  EXPECT_TRUE(is_close(mixture.result.mole_fraction("Ar"), 0.75, 1e-12));
+  EXPECT_TRUE(is_close(mixture.result.mole_fraction("He"), 0.25, 1e-12));
+}
+
+// Wrong if an element with zero amount in one solve left its species in the answer or broke rows.
+TEST(Equilibrium, AnElementWithZeroAmountDropsItsSpeciesForThatSolve) {
+  std::vector<SpeciesAmount> sour = methane_air(1.0);
+  sour.push_back({"H2S", 0.01});
+  const EquilibriumSolver solver(db(), element_amounts(db(), sour));
+  const ElementAmounts sweet = element_amounts(db(), methane_air(1.0));
+  const EquilibriumResult with_solver = solver.solve_tp(sweet, 2000.0, kAtm_Pa);
+  const EquilibriumResult reference = solve(methane_air(1.0), 2000.0).result;
+  EXPECT_EQ(with_solver.moles_of("SO2"), 0.0);
+  EXPECT_EQ(with_solver.moles_of("H2S"), 0.0);
+  for (const char* name : {"CO2", "CO", "NO", "OH", "H2"}) {
+    EXPECT_TRUE(is_close(with_solver.mole_fraction(name), reference.mole_fraction(name), 1e-9)) << name;
+  }
+  EXPECT_LE(with_solver.element_residual, kElementBalance);
+}
+
+// Wrong if a warm start changed the answer (it may only change the work).
+TEST(Equilibrium, AWarmStartGivesTheColdStartAnswer) {
+  const ElementAmounts b = element_amounts(db(), methane_air(1.3));
+  const EquilibriumSolver solver(db(), b);
+  const EquilibriumResult seed = solver.solve_tp(b, 1900.0, kAtm_Pa);
+  const EquilibriumResult warm = solver.solve_tp(b, 2000.0, 2.0 * kAtm_Pa, &seed);
+  const EquilibriumResult cold = solver.solve_tp(b, 2000.0, 2.0 * kAtm_Pa);
+  for (std::size_t i = 0; i < cold.species.size(); ++i) {
+    EXPECT_TRUE(is_close(warm.moles[i], cold.moles[i], 1e-9, 1e-300)) << cold.species[i];
+  }
+  EXPECT_LT(warm.iterations, cold.iterations);
+}
+
+// Wrong if pressure entered other than as ln(P / 1 bar): at 1 bar the solution of the mole-number
+// equations must equal the standard-state one; N2 + O2 = 2 NO does not change moles, so its
+// equilibrium is pressure-independent, while CO2 dissociation must fall with pressure.
+TEST(Equilibrium, PressureEntersThroughLnPOverOneBar) {
+  const std::vector<SpeciesAmount> air{{"N2", 3.0}, {"O2", 1.0}};
+  const std::vector<std::string> nitric{"N2", "O2", "NO"};
+  const double low = solve(air, 2500.0, 0.05 * kAtm_Pa, nitric).result.mole_fraction("NO");
+  const double high = solve(air, 2500.0, 50.0 * kAtm_Pa, nitric).result.mole_fraction("NO");
+  EXPECT_TRUE(is_close(low, high, 1e-10));
+  const std::vector<SpeciesAmount> co2{{"CO2", 1.0}};
+  const std::vector<std::string> carbon{"CO2", "CO", "O2"};
+  EXPECT_GT(solve(co2, 2500.0, 0.1 * kAtm_Pa, carbon).result.mole_fraction("CO"),
+            solve(co2, 2500.0, 10.0 * kAtm_Pa, carbon).result.mole_fraction("CO"));
+}
+
+// Wrong if conditions outside the data or physics were solved instead of refused.
+TEST(Equilibrium, RejectsTemperaturePressureAndElementsItCannotUse) {
+  const ElementAmounts b = element_amounts(db(), methane_air(1.0));
+  const EquilibriumSolver solver(db(), b);
+  EXPECT_THROW_WITH((void)solver.solve_tp(b, 3600.0, kAtm_Pa), units::InputError,
+                    "temperature = 3600 K: outside the data range of product CO2 (200-3500 K)");
+  EXPECT_THROW_WITH((void)solver.solve_tp(b, 150.0, kAtm_Pa), units::InputError, "temperature = 150 K");
+  EXPECT_THROW_WITH((void)solver.solve_tp(b, std::nan(""), kAtm_Pa), units::InputError,
+                    "must be a finite absolute temperature");
+  EXPECT_THROW_WITH((void)solver.solve_tp(b, 2000.0, 0.0), units::InputError, "pressure = 0 Pa");
+  ElementAmounts with_sulfur = b;
+  with_sulfur.moles[element_index("S")] = 0.1;
+  EXPECT_THROW_WITH((void)solver.solve_tp(with_sulfur, 2000.0, kAtm_Pa), units::InputError,
+                    "S = 0.1 mol, but this solver was built for the elements C, H, O, N only");
+  ElementAmounts negative = b;
+  negative.moles[element_index("H")] = -1.0;
+  EXPECT_THROW_WITH((void)solver.solve_tp(negative, 2000.0, kAtm_Pa), units::InputError, "H = -1");
+  EXPECT_THROW_WITH((void)solver.solve_tp(ElementAmounts{}, 2000.0, kAtm_Pa), units::InputError,
+                    "every element amount is zero");
+}
+
+// Wrong if a failure to converge returned a result instead of an error with the diagnostics.
+TEST(Equilibrium, NonConvergenceIsAnErrorCarryingTheDiagnostics) {
+  const ElementAmounts b = element_amounts(db(), methane_air(1.0));
+  EquilibriumOptions options;
+  options.max_iterations = 2;
+  const EquilibriumSolver solver(db(), b, {}, options);
+  try {
+    (void)solver.solve_tp(b, 2000.0, kAtm_Pa);
+    ADD_FAILURE() << "expected ConvergenceError";
+  } catch (const ConvergenceError& error) {
+    EXPECT_EQ(error.iterations(), 2);
+    EXPECT_TRUE(is_close(error.temperature_K(), 2000.0, 1e-15));
+    EXPECT_TRUE(is_close(error.pressure_Pa(), kAtm_Pa, 1e-15));
+    EXPECT_GT(error.element_residual(), 1e-12);
+    EXPECT_NE(std::string(error.what()).find("iteration limit reached (after 2 iterations"), std::string::npos)
+        << error.what();
+  }
+}
+
+// ---------------------------------------------------------------------------------------------------
+// HP (adiabatic flame)
+
+// Wrong if the HP solution's enthalpy missed the target, i.e. T were not the adiabatic temperature.
+TEST(AdiabaticFlame, ProductsEnthalpyEqualsTheFeedEnthalpy) {
+  for (const double phi : {0.6, 1.0, 1.4}) {
+    const std::vector<SpeciesAmount> feed = methane_air(phi);
+    const ElementAmounts b = element_amounts(db(), feed);
+    const double target_J = feed_enthalpy_J(db(), feed, 298.15);
+    const EquilibriumSolver solver(db(), b);
+    const EquilibriumResult hot = solver.solve_hp(b, target_J, kAtm_Pa);
+    EXPECT_NEAR(hot.enthalpy_J, target_J, 1e-5 * hot.equilibrium_heat_capacity_J_per_K) << phi;
+    // The products' enthalpy recomputed from the species data.
+    double enthalpy_J = 0.0;
+    for (std::size_t i = 0; i < hot.species.size(); ++i) {
+      enthalpy_J += hot.moles[i] * db().at(hot.species[i]).enthalpy(units::kelvin(hot.temperature_K)).value();
+    }
+    EXPECT_TRUE(is_close(enthalpy_J, hot.enthalpy_J, 1e-12, 1e-6));
+    EXPECT_LE(hot.element_residual, kElementBalance);
+    EXPECT_GT(hot.temperature_iterations, 1);
+  }
+}
+
+// Wrong if the equilibrium heat capacity (used by the Newton step on T) were not dH/dT at fixed P.
+TEST(AdiabaticFlame, EquilibriumHeatCapacityIsTheEnthalpySlope) {
+  const ElementAmounts b = element_amounts(db(), methane_air(1.0));
+  const EquilibriumSolver solver(db(), b);
+  const double dT = 0.01;
+  for (const double T : {1200.0, 2200.0, 3000.0}) {
+    const EquilibriumResult at = solver.solve_tp(b, T, kAtm_Pa);
+    const double slope = (solver.solve_tp(b, T + dT, kAtm_Pa).enthalpy_J - solver.solve_tp(b, T - dT, kAtm_Pa).enthalpy_J) /
+                         (2 * dT);
+    EXPECT_TRUE(is_close(at.equilibrium_heat_capacity_J_per_K, slope, 1e-5)) << T;
+    EXPECT_GE(at.equilibrium_heat_capacity_J_per_K, at.frozen_heat_capacity_J_per_K);
+  }
+}
+
+// Wrong if the heat loss were not taken from the heating value, or lowered T by the wrong amount.
+TEST(AdiabaticFlame, HeatLossLowersTheTemperatureToTheReducedEnthalpy) {
+  const std::vector<SpeciesAmount> feed = methane_air(1.0);
+  const FeedStream stream{feed, 298.15};
+  AdiabaticFlameOptions options;
+  const EquilibriumResult adiabatic = adiabatic_flame(db(), std::span<const FeedStream>(&stream, 1), options);
+  options.heat_loss_fraction = 0.1;
+  const EquilibriumResult lossy = adiabatic_flame(db(), std::span<const FeedStream>(&stream, 1), options);
+  const double hhv_J = feed_heating_value_J(db(), feed, HeatingValueKind::higher);
+  EXPECT_LT(lossy.temperature_K, adiabatic.temperature_K - 50.0);
+  EXPECT_NEAR(lossy.enthalpy_J, feed_enthalpy_J(db(), feed, 298.15) - 0.1 * hhv_J,
+              1e-5 * lossy.equilibrium_heat_capacity_J_per_K);
+  EXPECT_THROW_WITH((void)hp_target_enthalpy_J(0.0, 1.0, hhv_J), units::InputError, "heat loss = 1: must be");
+  EXPECT_THROW_WITH((void)hp_target_enthalpy_J(0.0, -0.1, hhv_J), units::InputError, "heat loss = -0.1");
+}
+
+// Wrong if the heating value missed the water's condensation or burned non-fuels. Methane's heat of
+// combustion from NIST-JANAF Delta_f H(298.15 K) values (CO2 -393.522, H2O(g) -241.826, H2O(l)
+// -285.830, CH4 -74.873 kJ/mol; tables C-095, H-064, H-063, C-067): LHV 802.301, HHV 890.309 kJ/mol
+// (derived by subtraction). Our data's formation enthalpies differ from JANAF's by < 0.02 kJ/mol each,
+// so 0.1 kJ/mol covers the data-set difference.
+TEST(AdiabaticFlame, HeatingValueOfMethaneMatchesTheJanafFormationEnthalpies) {
+  const std::vector<SpeciesAmount> feed{{"CH4", 2.0}, {"O2", 1.0}, {"N2", 5.0}, {"CO2", 0.5}, {"H2O", 0.3}};
+  EXPECT_NEAR(feed_heating_value_J(db(), feed, HeatingValueKind::lower) / 2.0, 802301.0, 100.0);
+  EXPECT_NEAR(feed_heating_value_J(db(), feed, HeatingValueKind::higher) / 2.0, 890309.0, 100.0);
+}
+
+// Wrong if an HP target beyond the species data were answered by extrapolation.
+TEST(AdiabaticFlame, RefusesFlamesHotterThanTheData) {
+  const std::vector<SpeciesAmount> feed{{"H2", 2.0}, {"O2", 1.0}};
+  const ElementAmounts b = element_amounts(db(), feed);
+  const EquilibriumSolver solver(db(), b);
+  const double preheated_J = feed_enthalpy_J(db(), feed, 2500.0);
+  EXPECT_THROW_WITH((void)solver.solve_hp(b, preheated_J, 100.0 * kAtm_Pa), units::InputError,
+                    "the products would be hotter than 3500 K, the upper end of the species data");
+}
+
+// Wrong if a warm-started HP solve reached a different temperature, or did not save work.
+TEST(AdiabaticFlame, WarmStartReachesTheSameTemperatureWithLessWork) {
+  const std::vector<SpeciesAmount> feed = methane_air(0.9);
+  const ElementAmounts b = element_amounts(db(), feed);
+  const EquilibriumSolver solver(db(), b);
+  const double target_J = feed_enthalpy_J(db(), feed, 298.15);
+  const EquilibriumResult seed = solver.solve_hp(b, target_J - 5000.0, kAtm_Pa);
+  const EquilibriumResult cold = solver.solve_hp(b, target_J, kAtm_Pa);
+  const EquilibriumResult warm = solver.solve_hp(b, target_J, kAtm_Pa, &seed);
+  EXPECT_NEAR(warm.temperature_K, cold.temperature_K, 1e-5);
+  EXPECT_LT(warm.iterations, cold.iterations);
+}
+
+// Wrong if a feed that releases no heat did not stay at its own temperature.
+TEST(AdiabaticFlame, AnInertFeedStaysAtItsTemperature) {
+  const FeedStream stream{{{"N2", 3.0}, {"Ar", 1.0}}, 650.0};
+  const EquilibriumResult result = adiabatic_flame(db(), std::span<const FeedStream>(&stream, 1));
+  EXPECT_NEAR(result.temperature_K, 650.0, 1e-5);
+}
+
+// Wrong if streams at different temperatures were not each counted at their own temperature.
+TEST(AdiabaticFlame, StreamsEnterAtTheirOwnTemperatures) {
+  const std::vector<FeedStream> split{{{{"CH4", 1.0}}, 298.15}, {{{"O2", 2.0}, {"N2", 7.52}}, 700.0}};
+  const EquilibriumResult preheated = adiabatic_flame(db(), split);
+  const std::vector<SpeciesAmount> all = methane_air(1.0);
+  const ElementAmounts b = element_amounts(db(), all);
+  const double target_J = feed_enthalpy_J(db(), split[0].species, 298.15) + feed_enthalpy_J(db(), split[1].species, 700.0);
+  const EquilibriumResult direct = EquilibriumSolver(db(), b).solve_hp(b, target_J, kAtm_Pa);
+  EXPECT_NEAR(preheated.temperature_K, direct.temperature_K, 1e-5);
+  const FeedStream cold{all, 298.15};
+  EXPECT_GT(preheated.temperature_K, adiabatic_flame(db(), std::span<const FeedStream>(&cold, 1)).temperature_K + 100.0);
+}
+
+}  // namespace
+}  // namespace stackbound::core
