@@ -31,7 +31,7 @@ struct FuelSpec {
   std::string gas_basis = "mole";          // mole | mass
   // Ultimate analysis in percent by mass (C, H, O, N, S, ash, moisture), on `ultimate_basis`:
   // as_received sums to 100 with ash and moisture; dry sums to 100 with ash (moisture as received);
-  // dry_ash_free sums to 100 without ash and moisture (both as received).
+  // dry_ash_free sums to 100 without ash and moisture (ash on the dry basis, moisture as received).
   std::vector<GasComponent> ultimate;
   std::string ultimate_basis = "as_received";  // as_received | dry | dry_ash_free
   std::string state = "solid";                 // solid | liquid (ultimate analyses only)
@@ -39,7 +39,9 @@ struct FuelSpec {
   std::string heating_value_basis = "HHV";     // HHV | LHV
   std::string heating_value_correlation;       // instead of a measured value: channiwala_parikh | boie
   std::optional<double> specific_heat_J_per_kg_K;  // of the as-fired liquid/solid fuel
+  std::string field = "fuel";                  // path in the file, for messages ("fuel.blend[1]")
   std::string location;                        // "file:line:column" of this fuel's mapping
+  std::string kind_location;                   // of its preset / gas / ultimate / blend value
   // Blend components and the fraction each takes (by `blend_by`), fractions summing to 1.
   std::vector<std::pair<FuelSpec, double>> blend;
   std::string blend_by = "mass";               // mass | mole | heat

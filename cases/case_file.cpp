@@ -6,6 +6,7 @@
 
 #include <fmt/format.h>
 
+#include "cases/fuel_spec.hpp"
 #include "cases/yaml_reader.hpp"
 #include "units/input_error.hpp"
 
@@ -16,12 +17,6 @@ namespace {
 using units::Dimension;
 
 SourceText source_text(const YamlField& field) { return {field.text(), field.location(), field.path()}; }
-
-double percent_value(const YamlField& field) {
-  const double fraction = field.quantity_si(Dimension::fraction);
-  if (fraction < 0.0) field.fail("must be >= 0 %");
-  return fraction * 100.0;
-}
 
 double fraction_in(const YamlField& field, double low, double high, const char* rule) {
   const double fraction = field.quantity_si(Dimension::fraction);
@@ -43,73 +38,9 @@ std::vector<std::string> string_list(const YamlField& field) {
   return items;
 }
 
-std::vector<GasComponent> composition(const YamlField& field) {
-  std::vector<GasComponent> components;
-  for (const auto& [name, value] : field.entries()) components.push_back({name, percent_value(value)});
-  if (components.empty()) field.fail("lists no components");
-  return components;
-}
-
-FuelSpec fuel_spec(const YamlField& fuel, bool allow_feed) {
-  if (allow_feed) {
-    fuel.allow_only({"name", "preset", "gas", "gas_basis", "ultimate", "ultimate_basis", "state", "heating_value",
-                     "heating_value_basis", "heating_value_correlation", "specific_heat", "blend", "blend_by",
-                     "feed_rate", "temperature"});
-  } else {
-    fuel.allow_only({"name", "preset", "gas", "gas_basis", "ultimate", "ultimate_basis", "state", "heating_value",
-                     "heating_value_basis", "heating_value_correlation", "specific_heat", "fraction"});
-  }
-  FuelSpec spec;
-  spec.location = fuel.location();
-  const std::string kind =
-      allow_feed ? fuel.one_of({"preset", "gas", "ultimate", "blend"}) : fuel.one_of({"preset", "gas", "ultimate"});
-  if (const auto name = fuel.optional("name")) spec.name = name->text();
-  if (kind == "preset") {
-    spec.preset = fuel.required("preset").text();
-  } else if (kind == "gas") {
-    spec.gas = composition(fuel.required("gas"));
-    if (const auto basis = fuel.optional("gas_basis")) spec.gas_basis = basis->choice({"mole", "mass"});
-  } else if (kind == "ultimate") {
-    const YamlField ultimate = fuel.required("ultimate");
-    ultimate.allow_only({"C", "H", "O", "N", "S", "ash", "moisture"});
-    spec.ultimate = composition(ultimate);
-    if (const auto basis = fuel.optional("ultimate_basis")) {
-      spec.ultimate_basis = basis->choice({"as_received", "dry", "dry_ash_free"});
-    }
-    if (const auto state = fuel.optional("state")) spec.state = state->choice({"solid", "liquid"});
-    if (const auto correlation = fuel.optional("heating_value_correlation")) {
-      if (fuel.has("heating_value")) correlation->fail("give a measured heating_value or a correlation, not both");
-      spec.heating_value_correlation = correlation->choice({"channiwala_parikh", "boie"});
-    }
-    if (const auto cp = fuel.optional("specific_heat")) {
-      // J/(kg K) has no unit symbol in the parser; the value is a plain number in kJ/(kg K).
-      spec.specific_heat_J_per_kg_K = cp->number() * 1e3;
-      if (!(*spec.specific_heat_J_per_kg_K > 0.0 && *spec.specific_heat_J_per_kg_K < 10e3)) {
-        cp->fail("must be a plain number in kJ/(kg K) between 0 and 10");
-      }
-    }
-  } else {
-    const YamlField blend = fuel.required("blend");
-    if (!blend.is_sequence() || blend.size() < 2) blend.fail("expected a list of two or more fuels, each with a fraction");
-    for (std::size_t i = 0; i < blend.size(); ++i) {
-      const YamlField component = blend.element(i);
-      FuelSpec part = fuel_spec(component, false);
-      const double fraction = fraction_in(component.required("fraction"), 0.0, 1.0, "must be between 0 % and 100 %");
-      spec.blend.emplace_back(std::move(part), fraction);
-    }
-    if (const auto by = fuel.optional("blend_by")) spec.blend_by = by->choice({"mass", "mole", "heat"});
-  }
-  if (const auto hv = fuel.optional("heating_value")) {
-    spec.heating_value_J_per_kg = hv->quantity_si(Dimension::specific_energy);
-    if (*spec.heating_value_J_per_kg <= 0.0) hv->fail("must be > 0");
-  }
-  if (const auto basis = fuel.optional("heating_value_basis")) spec.heating_value_basis = basis->choice({"HHV", "LHV"});
-  return spec;
-}
-
 FuelFeedSpec fuel_feed(const YamlField& fuel) {
   FuelFeedSpec feed;
-  feed.fuel = fuel_spec(fuel, true);
+  feed.fuel = read_fuel_spec(fuel, false);
   const YamlField rate = fuel.required("feed_rate");
   feed.feed_rate = rate.quantity({Dimension::mass_flow, Dimension::molar_flow, Dimension::power});
   if (feed.feed_rate.value_si <= 0.0) rate.fail("must be > 0");

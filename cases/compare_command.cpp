@@ -26,7 +26,8 @@ struct CompareCli {
 
 struct Comparison {
   std::vector<RunResult> runs;
-  std::vector<std::vector<Metric>> metrics;  // per run, same keys in the same order
+  std::vector<MetricColumn> columns;         // of the first run
+  std::vector<std::vector<double>> values;   // per run, in the columns' order
   std::vector<std::string> flags;
 };
 
@@ -39,12 +40,12 @@ std::optional<double> relative(double value, double first) {
 Comparison compare(const std::vector<std::string>& files, const core::SpeciesDatabase& database) {
   Comparison comparison;
   for (const std::string& file : files) comparison.runs.push_back(run_case(load_case(file), database));
-  for (const RunResult& run : comparison.runs) comparison.metrics.push_back(run_metrics(run));
-  const std::vector<Metric>& first = comparison.metrics.front();
-  for (std::size_t i = 1; i < comparison.metrics.size(); ++i) {
-    const std::vector<Metric>& other = comparison.metrics[i];
-    bool same_columns = other.size() == first.size();
-    for (std::size_t k = 0; same_columns && k < first.size(); ++k) same_columns = other[k].key == first[k].key;
+  comparison.columns = run_metric_columns(comparison.runs.front());
+  for (const RunResult& run : comparison.runs) comparison.values.push_back(run_metric_values(run));
+  for (std::size_t i = 1; i < comparison.runs.size(); ++i) {
+    const std::vector<MetricColumn> other = run_metric_columns(comparison.runs[i]);
+    bool same_columns = other.size() == comparison.columns.size();
+    for (std::size_t k = 0; same_columns && k < other.size(); ++k) same_columns = other[k].key == comparison.columns[k].key;
     if (!same_columns) {
       throw units::InputError(fmt::format("{}: report.pollutants must list the same pollutants as {} to compare them",
                                           comparison.runs[i].definition.origin, comparison.runs[0].definition.origin));
@@ -78,13 +79,13 @@ emissions::Report comparison_report(const Comparison& c) {
     table.columns.push_back(fmt::format("{} - A", static_cast<char>('A' + i)));
     table.columns.push_back(fmt::format("({} - A)/A [%]", static_cast<char>('A' + i)));
   }
-  const std::vector<Metric>& first = c.metrics.front();
-  for (std::size_t k = 0; k < first.size(); ++k) {
-    std::vector<std::string> row{first[k].header};
-    for (const auto& metrics : c.metrics) row.push_back(fmt::format("{:.5g}", metrics[k].value));
-    for (std::size_t i = 1; i < c.metrics.size(); ++i) {
-      row.push_back(fmt::format("{:+.4g}", c.metrics[i][k].value - first[k].value));
-      const auto rel = relative(c.metrics[i][k].value, first[k].value);
+  const std::vector<double>& first = c.values.front();
+  for (std::size_t k = 0; k < c.columns.size(); ++k) {
+    std::vector<std::string> row{c.columns[k].header};
+    for (const auto& values : c.values) row.push_back(fmt::format("{:.5g}", values[k]));
+    for (std::size_t i = 1; i < c.values.size(); ++i) {
+      row.push_back(fmt::format("{:+.4g}", c.values[i][k] - first[k]));
+      const auto rel = relative(c.values[i][k], first[k]);
       row.push_back(rel ? fmt::format("{:+.2f}", *rel * 100.0) : "-");
     }
     table.rows.push_back(std::move(row));
@@ -105,12 +106,12 @@ nlohmann::json comparison_json(const Comparison& c) {
   for (std::size_t i = 0; i < c.runs.size(); ++i) {
     nlohmann::json values = nlohmann::json::object();
     nlohmann::json differences = nlohmann::json::object();
-    for (std::size_t k = 0; k < c.metrics[i].size(); ++k) {
-      const double value = c.metrics[i][k].value;
-      const double first = c.metrics[0][k].value;
-      values[c.metrics[i][k].key] = value;
+    for (std::size_t k = 0; k < c.columns.size(); ++k) {
+      const double value = c.values[i][k];
+      const double first = c.values[0][k];
+      values[c.columns[k].key] = value;
       const auto rel = relative(value, first);
-      differences[c.metrics[i][k].key] = {{"absolute", value - first}, {"relative", rel ? nlohmann::json(*rel) : nlohmann::json(nullptr)}};
+      differences[c.columns[k].key] = {{"absolute", value - first}, {"relative", rel ? nlohmann::json(*rel) : nlohmann::json(nullptr)}};
     }
     cases.push_back({{"label", std::string(1, static_cast<char>('A' + i))},
                      {"file", c.runs[i].definition.origin},
@@ -120,7 +121,7 @@ nlohmann::json comparison_json(const Comparison& c) {
                      {"findings", c.runs[i].findings}});
   }
   nlohmann::json units = nlohmann::json::object();
-  for (const Metric& m : c.metrics.front()) units[m.key] = m.header;
+  for (const MetricColumn& column : c.columns) units[column.key] = column.header;
   return {{"bound_statement", kBoundStatement}, {"cases", cases},      {"columns", units},
           {"flags", c.flags},                    {"cautions", c.runs.front().cautions}};
 }

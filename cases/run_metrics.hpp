@@ -1,5 +1,6 @@
 #pragma once
 // The headline numbers of a run as named columns with units, shared by sweeps and comparisons.
+// Columns (names and units) and values are separate, so a sweep formats its header once.
 
 #include <string>
 #include <vector>
@@ -8,14 +9,16 @@
 
 namespace stackbound::cases {
 
-struct Metric {
+struct MetricColumn {
   std::string key;     // stable JSON key, e.g. "CO_mg_per_Nm3_at_ref_o2"
   std::string header;  // with unit, e.g. "CO bound [mg/Nm3 @ 3 % O2]"
-  double value = 0.0;
 };
 
 // Firing temperature, excess air, flue O2 and moisture, heat input, stack flow, then for each
 // pollutant ppmvd, ppmvd and mg/Nm3 at the reference O2, kg/h and lb/MMBtu.
-std::vector<Metric> run_metrics(const RunResult& result);
+std::vector<MetricColumn> run_metric_columns(const RunResult& result);
+
+// The values of those columns, in the same order.
+std::vector<double> run_metric_values(const RunResult& result);
 
 }  // namespace stackbound::cases

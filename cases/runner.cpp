@@ -6,7 +6,7 @@
 
 #include <fmt/format.h>
 
-#include "core/fuel_presets.hpp"
+#include "cases/fuel_spec.hpp"
 #include "emissions/basis.hpp"
 #include "emissions/cautions.hpp"
 #include "emissions/concentration.hpp"
@@ -32,59 +32,6 @@ auto located(const std::string& location, F&& step) -> decltype(step()) {
     if (location.empty() || message.rfind(location, 0) == 0) throw;
     throw units::InputError(fmt::format("{}: {}", location, message));
   }
-}
-
-core::Fuel build_fuel(const FuelSpec& spec, const core::SpeciesDatabase& database, const std::string& field) {
-  return located(spec.location, [&]() -> core::Fuel {
-    if (!spec.preset.empty()) return core::preset_fuel(spec.preset, database, field + ".preset");
-    if (!spec.gas.empty()) {
-      core::GasFuelSpec gas;
-      gas.name = spec.name.empty() ? "gas fuel" : spec.name;
-      for (const GasComponent& c : spec.gas) gas.composition_percent.emplace_back(c.formula, c.percent);
-      gas.basis = spec.gas_basis == "mass" ? core::CompositionBasis::mass : core::CompositionBasis::mole;
-      gas.field = field + ".gas";
-      return core::Fuel::gas(gas, database);
-    }
-    if (!spec.ultimate.empty()) {
-      core::CondensedFuelSpec fuel;
-      fuel.name = spec.name.empty() ? "fuel" : spec.name;
-      fuel.state = spec.state == "liquid" ? core::FuelState::liquid : core::FuelState::solid;
-      core::UltimateAnalysis& a = fuel.analysis;
-      for (const GasComponent& c : spec.ultimate) {
-        if (c.formula == "C") a.carbon_percent = c.percent;
-        if (c.formula == "H") a.hydrogen_percent = c.percent;
-        if (c.formula == "O") a.oxygen_percent = c.percent;
-        if (c.formula == "N") a.nitrogen_percent = c.percent;
-        if (c.formula == "S") a.sulfur_percent = c.percent;
-        if (c.formula == "ash") a.ash_percent = c.percent;
-        if (c.formula == "moisture") a.moisture_percent = c.percent;
-      }
-      a.basis = spec.ultimate_basis == "dry"            ? core::AnalysisBasis::dry
-                : spec.ultimate_basis == "dry_ash_free" ? core::AnalysisBasis::dry_ash_free
-                                                        : core::AnalysisBasis::as_received;
-      if (spec.heating_value_J_per_kg) {
-        fuel.heating_value = core::MeasuredHeatingValue{
-            spec.heating_value_basis == "LHV" ? core::HeatingValueKind::lower : core::HeatingValueKind::higher,
-            *spec.heating_value_J_per_kg, a.basis};
-      } else if (spec.heating_value_correlation == "channiwala_parikh") {
-        fuel.estimate = core::HeatingValueCorrelation::channiwala_parikh;
-      } else if (spec.heating_value_correlation == "boie") {
-        fuel.estimate = core::HeatingValueCorrelation::boie;
-      }
-      fuel.specific_heat_J_per_kg_K = spec.specific_heat_J_per_kg_K;
-      fuel.field = field;
-      return core::Fuel::condensed(fuel, database);
-    }
-    std::vector<core::BlendPart> parts;
-    for (std::size_t i = 0; i < spec.blend.size(); ++i) {
-      const auto& [part, fraction] = spec.blend[i];
-      parts.push_back({build_fuel(part, database, fmt::format("{}.blend[{}]", field, i)), fraction * 100.0});
-    }
-    const core::BlendBasis basis = spec.blend_by == "mole"   ? core::BlendBasis::mole
-                                   : spec.blend_by == "heat" ? core::BlendBasis::heat_input
-                                                             : core::BlendBasis::mass;
-    return core::Fuel::blend(spec.name.empty() ? "fuel blend" : spec.name, parts, basis, field + ".blend");
-  });
 }
 
 core::Oxidant build_oxidant(const AirSpec& air) {
@@ -150,7 +97,7 @@ std::string percent(double fraction) { return fmt::format("{:.2f} %", fraction *
 }  // namespace
 
 RunResult run_case(const CaseDefinition& definition, const core::SpeciesDatabase& database, const RunOptions& options) {
-  const core::Fuel fuel = build_fuel(definition.fuel.fuel, database, "fuel");
+  const core::Fuel fuel = build_fuel(definition.fuel.fuel, database);
   const core::Oxidant oxidant = located(definition.origin, [&] { return build_oxidant(definition.air); });
   const core::OperatingPoint op = build_operating_point(definition);
   const core::CombustionResult combustion =

@@ -80,7 +80,7 @@ class CsvSweepWriter {
         pending_.push_back(point);
         if (pending_.size() < 1000) return;
       }
-      write_header(point.result ? run_metrics(*point.result).size() : 0, point.result ? &*point.result : nullptr);
+      write_header(point.result ? &*point.result : nullptr);
       for (const SweepPoint& earlier : pending_) write_row(earlier);
       pending_.clear();
     }
@@ -89,21 +89,22 @@ class CsvSweepWriter {
 
   void finish() {
     if (!header_written_) {
-      write_header(0, nullptr);
+      write_header(nullptr);
       for (const SweepPoint& earlier : pending_) write_row(earlier);
     }
   }
 
  private:
-  void write_header(std::size_t metric_count, const RunResult* first) {
+  void write_header(const RunResult* first) {
     std::string line = "point";
     for (const VarySpec& v : vary_) line += "," + csv_cell(parameter_header(v));
     line += ",status";
     if (first != nullptr) {
-      for (const Metric& m : run_metrics(*first)) line += "," + csv_cell(m.header);
+      const std::vector<MetricColumn> columns = run_metric_columns(*first);
+      for (const MetricColumn& column : columns) line += "," + csv_cell(column.header);
+      metric_count_ = columns.size();
     }
     line += ",error\n";
-    metric_count_ = metric_count;
     out_.write(line);
     header_written_ = true;
   }
@@ -115,7 +116,7 @@ class CsvSweepWriter {
     }
     line += point.result ? ",ok" : ",failed";
     if (point.result) {
-      for (const Metric& m : run_metrics(*point.result)) line += fmt::format(",{:.8g}", m.value);
+      for (const double value : run_metric_values(*point.result)) line += fmt::format(",{:.8g}", value);
     } else {
       line += std::string(metric_count_, ',');
     }
@@ -139,11 +140,12 @@ class HtmlSweepCollector {
   void add(const SweepPoint& point) {
     Row row{point.values, {}, point.error};
     if (point.result) {
-      for (const Metric& m : run_metrics(*point.result)) row.metrics[m.key] = m.value;
-      if (headers_.empty()) {
-        for (const Metric& m : run_metrics(*point.result)) headers_.emplace_back(m.key, m.header);
+      if (columns_.empty()) {
+        columns_ = run_metric_columns(*point.result);
         reference_o2_ = emissions::percent_text(point.result->reference_o2_dry) + " % O2";
       }
+      const std::vector<double> values = run_metric_values(*point.result);
+      for (std::size_t k = 0; k < values.size() && k < columns_.size(); ++k) row.metrics[columns_[k].key] = values[k];
     } else {
       ++failed_;
     }
@@ -178,15 +180,15 @@ class HtmlSweepCollector {
     table.title = "Points";
     table.columns.push_back("point");
     for (const VarySpec& v : vary_) table.columns.push_back(parameter_header(v));
-    for (const auto& [key, header] : headers_) table.columns.push_back(header);
+    for (const MetricColumn& column : columns_) table.columns.push_back(column.header);
     table.columns.push_back("error");
     for (std::size_t i = 0; i < rows_.size() && i < kHtmlMaxTableRows; ++i) {
       std::vector<std::string> cells{std::to_string(i + 1)};
       for (std::size_t k = 0; k < vary_.size(); ++k) {
         cells.push_back(fmt::format("{:.6g}", sweep_parameter_display(vary_[k].parameter, rows_[i].values[k])));
       }
-      for (const auto& [key, header] : headers_) {
-        const auto found = rows_[i].metrics.find(key);
+      for (const MetricColumn& column : columns_) {
+        const auto found = rows_[i].metrics.find(column.key);
         cells.push_back(found == rows_[i].metrics.end() ? "-" : fmt::format("{:.5g}", found->second));
       }
       cells.push_back(rows_[i].error);
@@ -236,7 +238,7 @@ class HtmlSweepCollector {
 
   const std::vector<VarySpec>& vary_;
   std::vector<Row> rows_;
-  std::vector<std::pair<std::string, std::string>> headers_;
+  std::vector<MetricColumn> columns_;
   std::string reference_o2_ = "reference O2";
   std::size_t failed_ = 0;
 };

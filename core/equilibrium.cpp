@@ -16,6 +16,30 @@
 
 namespace stackbound::core {
 
+// One product species as the Newton system sees it: its balance rows and, per solve, its
+// dimensionless properties at T.
+struct EquilibriumTerm {
+  std::size_t candidate = 0;
+  double g = 0.0;   // gas: g/RT + ln(P/P0); condensed: g/RT
+  double h = 0.0;   // h/RT
+  double cp = 0.0;  // cp/R
+  int count = 0;    // number of independent balance rows the species enters
+  // ln n_j below which the species' share of every balance it enters is under e^-60 (about 1e-26):
+  // it is left out of the Newton matrix (its ln n_j is still updated exactly).
+  double negligible_ln_moles = -std::numeric_limits<double>::infinity();
+  std::array<int, kElementCount> row{};
+  std::array<double, kElementCount> atoms{};
+  std::array<double, kElementCount> log_atoms{};
+};
+
+using Term = EquilibriumTerm;
+
+// Rows of every candidate when every element present at construction is present in the solve.
+struct EquilibriumTables {
+  std::vector<Term> gas;
+  std::vector<Term> condensed;
+};
+
 namespace {
 
 constexpr double kR = units::kGasConstant_J_per_mol_K;
@@ -24,6 +48,31 @@ constexpr double kR = units::kGasConstant_J_per_mol_K;
 constexpr int kMaxDimension = 2 * static_cast<int>(kElementCount) + 2;
 using Matrix = Eigen::Matrix<double, Eigen::Dynamic, Eigen::Dynamic, 0, kMaxDimension, kMaxDimension>;
 using Vector = Eigen::Matrix<double, Eigen::Dynamic, 1, 0, kMaxDimension, 1>;
+
+// LU factorisation (partial pivoting) of the Newton matrix with symmetric diagonal scaling, so that
+// the rows of trace elements stay well conditioned.
+class NewtonFactorisation {
+ public:
+  // `moles_scale`: the total-moles row and column are scaled by 1/sqrt(moles_scale).
+  void compute(const Matrix& M, int element_rows, double moles_scale) {
+    dimension_ = static_cast<int>(M.rows());
+    scaling_.setOnes(dimension_);
+    for (int r = 0; r < element_rows; ++r) {
+      if (M(r, r) > 0.0) scaling_[r] = 1.0 / std::sqrt(M(r, r));
+    }
+    scaling_[dimension_ - 1] = 1.0 / std::sqrt(moles_scale);
+    lu_.compute(scaling_.asDiagonal() * M * scaling_.asDiagonal());
+  }
+  [[nodiscard]] Vector solve(const Vector& rhs) const {
+    return scaling_.asDiagonal() * lu_.solve(scaling_.asDiagonal() * rhs);
+  }
+  [[nodiscard]] int dimension() const { return dimension_; }
+
+ private:
+  int dimension_ = 0;
+  Vector scaling_;
+  Eigen::PartialPivLU<Matrix> lu_;
+};
 
 // Step control of NASA RP-1311 (eqs. 3.1-3.3): a species above mole fraction 1e-8 may grow by at most
 // e^2 per step (and n by e^0.4); a trace species may rise to at most mole fraction 1e-4 in one step.
@@ -38,8 +87,9 @@ constexpr double kStateFloorLogFraction = -1.0e5;
 constexpr double kWarmZeroLogFraction = -50.0;
 // A warm start is used when its temperature is within a factor e^0.3 (about 35 %) of the new one.
 constexpr double kWarmStartLogTemperatureRange = 0.3;
-// Within e^0.02 (about 2 %) the warm start's element potentials are used directly.
-constexpr double kPotentialStartLogTemperatureRange = 0.02;
+// Within e^1e-4 (0.01 %) the warm start's element potentials are used directly (an HP Newton step
+// on T, a sweep in pressure or feed); beyond, its amounts are the better start.
+constexpr double kPotentialStartLogTemperatureRange = 1e-4;
 // Condensed phase entry: g_c/RT - sum_k a_kc pi_k below this (dimensionless) admits the species.
 constexpr double kPhaseEntryTolerance = -1e-10;
 constexpr int kMaxPhaseChanges = 20;
@@ -49,19 +99,6 @@ constexpr double kNegligibleLogShare = -60.0;
 constexpr double kSlowRatio = 0.2;
 // A dependent balance row (restricted product list) that misses by more than this is infeasible.
 constexpr double kDependentRowTolerance = 1e-9;
-
-struct Term {
-  std::size_t candidate = 0;
-  double g = 0.0;   // gas: g/RT + ln(P/P0); condensed: g/RT
-  double h = 0.0;   // h/RT
-  double cp = 0.0;  // cp/R
-  int count = 0;    // number of independent balance rows the species enters
-  // ln n_j below which the species' share of every balance it enters is under e^-60 (about 1e-26):
-  // it is left out of the Newton matrix (its ln n_j is still updated exactly).
-  double negligible_ln_moles = -std::numeric_limits<double>::infinity();
-  std::array<int, kElementCount> row{};
-  std::array<double, kElementCount> atoms{};
-};
 
 void nasa7_properties(const std::array<double, 7>& a, double T, double lnT, double& g, double& h, double& cp) {
   const double T2 = T * T;
@@ -343,7 +380,9 @@ EquilibriumSolver::EquilibriumSolver(const SpeciesDatabase& db, const ElementAmo
         candidate.atoms[element_index(count.element)] += count.count;
       }
       for (std::size_t k = 0; k < kElementCount; ++k) {
-        candidate.log_atoms[k] = candidate.atoms[k] > 0.0 ? std::log(candidate.atoms[k]) : 0.0;
+        if (candidate.atoms[k] == 0.0) continue;
+        candidate.atom_count += candidate.atoms[k];
+        candidate.elements[static_cast<std::size_t>(candidate.element_count++)] = k;
       }
       candidate.below_mid = species->record().below_mid;
       candidate.above_mid = species->record().above_mid;
@@ -397,6 +436,9 @@ EquilibriumSolver::EquilibriumSolver(const SpeciesDatabase& db, const ElementAmo
                                         min_temperature_K_, max_temperature_K_));
   }
   independent_all_ = independent_rows(element_allowed_);
+  auto tables = std::make_shared<EquilibriumTables>();
+  build_terms(element_allowed_, rows_of(independent_all_), tables->gas, tables->condensed);
+  tables_ = std::move(tables);
 }
 
 std::array<bool, kElementCount> EquilibriumSolver::independent_rows(
@@ -425,6 +467,38 @@ std::array<bool, kElementCount> EquilibriumSolver::independent_rows(
     independent[elements[static_cast<std::size_t>(qr.colsPermutation().indices()[i])]] = true;
   }
   return independent;
+}
+
+void EquilibriumSolver::build_terms(const std::array<bool, kElementCount>& active,
+                                    const std::array<int, kElementCount>& row_of, std::vector<EquilibriumTerm>& gas,
+                                    std::vector<EquilibriumTerm>& condensed) const {
+  gas.clear();
+  condensed.clear();
+  for (std::size_t i = 0; i < candidates_.size(); ++i) {
+    const Candidate& c = candidates_[i];
+    bool usable = true;
+    for (std::size_t k = 0; k < kElementCount; ++k) usable = usable && (c.atoms[k] == 0.0 || active[k]);
+    if (!usable) continue;
+    Term term;
+    term.candidate = i;
+    for (std::size_t k = 0; k < kElementCount; ++k) {
+      if (c.atoms[k] > 0.0 && row_of[k] >= 0) {
+        const std::size_t slot = static_cast<std::size_t>(term.count);
+        term.row[slot] = row_of[k];
+        term.atoms[slot] = c.atoms[k];
+        term.log_atoms[slot] = std::log(c.atoms[k]);
+        ++term.count;
+      }
+    }
+    (c.gas ? gas : condensed).push_back(term);
+  }
+}
+
+std::array<int, kElementCount> EquilibriumSolver::rows_of(const std::array<bool, kElementCount>& independent) {
+  std::array<int, kElementCount> row_of{};
+  int next = 0;
+  for (std::size_t k = 0; k < kElementCount; ++k) row_of[k] = independent[k] ? next++ : -1;
+  return row_of;
 }
 
 void EquilibriumSolver::check_temperature(double temperature_K) const {
@@ -545,29 +619,26 @@ EquilibriumResult EquilibriumWork::solve(const EquilibriumSolver& solver, const 
   const double lnP = std::log(P / units::kStandardStatePressure_Pa);
   std::vector<Term> gas;
   std::vector<Term> condensed;
-  gas.reserve(solver.gas_count_);
-  for (std::size_t i = 0; i < solver.candidates_.size(); ++i) {
-    const Candidate& c = solver.candidates_[i];
-    bool usable = true;
-    for (std::size_t k = 0; k < kElementCount; ++k) usable = usable && (c.atoms[k] == 0.0 || active[k]);
-    if (!usable) continue;
-    Term term;
-    term.candidate = i;
-    nasa7_properties(T < c.mid_K ? c.below_mid : c.above_mid, T, lnT, term.g, term.h, term.cp);
-    if (c.gas) term.g += lnP;
-    term.negligible_ln_moles = std::numeric_limits<double>::infinity();
-    for (std::size_t k = 0; k < kElementCount; ++k) {
-      if (c.atoms[k] > 0.0 && row_of[k] >= 0) {
-        term.row[static_cast<std::size_t>(term.count)] = row_of[k];
-        term.atoms[static_cast<std::size_t>(term.count)] = c.atoms[k];
-        ++term.count;
-        term.negligible_ln_moles =
-            std::min(term.negligible_ln_moles,
-                     ln_bs[static_cast<std::size_t>(row_of[k])] - c.log_atoms[k] + kNegligibleLogShare);
+  if (active == solver.element_allowed_) {
+    gas = solver.tables_->gas;
+    condensed = solver.tables_->condensed;
+  } else {
+    solver.build_terms(active, row_of, gas, condensed);
+  }
+  for (std::vector<Term>* terms : {&gas, &condensed}) {
+    for (Term& term : *terms) {
+      const Candidate& c = solver.candidates_[term.candidate];
+      nasa7_properties(T < c.mid_K ? c.below_mid : c.above_mid, T, lnT, term.g, term.h, term.cp);
+      if (c.gas) term.g += lnP;
+      term.negligible_ln_moles = term.count > 0 ? std::numeric_limits<double>::infinity()
+                                                : -std::numeric_limits<double>::infinity();
+      for (int p = 0; p < term.count; ++p) {
+        const std::size_t up = static_cast<std::size_t>(p);
+        term.negligible_ln_moles = std::min(
+            term.negligible_ln_moles,
+            ln_bs[static_cast<std::size_t>(term.row[up])] - term.log_atoms[up] + kNegligibleLogShare);
       }
     }
-    if (term.count == 0) term.negligible_ln_moles = -std::numeric_limits<double>::infinity();
-    (c.gas ? gas : condensed).push_back(term);
   }
   const std::size_t S = gas.size();
   const std::size_t C = condensed.size();
@@ -589,11 +660,7 @@ EquilibriumResult EquilibriumWork::solve(const EquilibriumSolver& solver, const 
   if (warm != nullptr && warm->species_key == solver.species_key_ && warm->moles.size() == solver.names_.size() &&
       warm_log_temperature_change <= kWarmStartLogTemperatureRange) {
     double atoms = 0.0;
-    for (std::size_t i = 0; i < solver.candidates_.size(); ++i) {
-      double per = 0.0;
-      for (double a : solver.candidates_[i].atoms) per += a;
-      atoms += per * warm->moles[i];
-    }
+    for (std::size_t i = 0; i < solver.candidates_.size(); ++i) atoms += solver.candidates_[i].atom_count * warm->moles[i];
     double gas_total = 0.0;
     for (const Term& t : gas) gas_total += warm->moles[t.candidate];
     // Near the warm start's temperature its element potentials give every gas amount at once, in
@@ -661,8 +728,7 @@ EquilibriumResult EquilibriumWork::solve(const EquilibriumSolver& solver, const 
   Matrix M;
   Vector rhs;
   Vector x;
-  Vector scaling;
-  Eigen::PartialPivLU<Matrix> lu;
+  NewtonFactorisation lu;
   int iterations = 0;
   int phase_changes = 0;
   bool full_step = polished_start;
@@ -858,14 +924,8 @@ EquilibriumResult EquilibriumWork::solve(const EquilibriumSolver& solver, const 
     lnN_old = lnN;
     nc_old = nc;
 
-    // Solve with symmetric diagonal scaling (rows of trace elements stay well conditioned).
-    scaling.setOnes(dim);
-    for (int r = 0; r < E; ++r) {
-      if (M(r, r) > 0.0) scaling[r] = 1.0 / std::sqrt(M(r, r));
-    }
-    scaling[nrow] = 1.0 / std::sqrt(std::max(sum_n, N));
-    lu.compute(scaling.asDiagonal() * M * scaling.asDiagonal());
-    x = scaling.asDiagonal() * lu.solve(scaling.asDiagonal() * rhs);
+    lu.compute(M, E, std::max(sum_n, N));
+    x = lu.solve(rhs);
     ++iterations;
     if (!x.allFinite()) {
       throw ConvergenceError("singular Newton system", iterations, element_residual, T, P);
@@ -944,15 +1004,10 @@ EquilibriumResult EquilibriumWork::solve(const EquilibriumSolver& solver, const 
   // The factorisation of the last Newton step serves: its matrix differs from the one at the
   // solution by the last (converged) correction, far below the accuracy a heat capacity needs.
   if (iterations == 0) {  // converged at the start: factorise the matrix at the solution
-    scaling.setOnes(dim);
-    for (int r = 0; r < E; ++r) {
-      if (M(r, r) > 0.0) scaling[r] = 1.0 / std::sqrt(M(r, r));
-    }
-    scaling[nrow] = 1.0 / std::sqrt(std::exp(lnN));
-    lu.compute(scaling.asDiagonal() * M * scaling.asDiagonal());
+    lu.compute(M, E, std::exp(lnN));
   }
-  if (lu.rows() == dim) {
-    const Vector derivative = scaling.asDiagonal() * lu.solve(scaling.asDiagonal() * rhs_T);
+  if (lu.dimension() == dim) {
+    const Vector derivative = lu.solve(rhs_T);
     if (derivative.allFinite()) {
       const double dlnN = derivative[nrow];
       for (std::size_t j = 0; j < S; ++j) {
@@ -1000,9 +1055,13 @@ EquilibriumResult EquilibriumWork::solve(const EquilibriumSolver& solver, const 
 
   // Element balances of the reported amounts, every active element (dependent rows included).
   ElementAmounts products;
-  for (std::size_t i = 0; i < solver.candidates_.size(); ++i) {
-    for (std::size_t k = 0; k < kElementCount; ++k) {
-      products.moles[k] += solver.candidates_[i].atoms[k] * result.moles[i];
+  for (const std::vector<Term>* terms : {&gas, &condensed}) {
+    for (const Term& t : *terms) {
+      const Candidate& c = solver.candidates_[t.candidate];
+      for (int e = 0; e < c.element_count; ++e) {
+        const std::size_t k = c.elements[static_cast<std::size_t>(e)];
+        products.moles[k] += c.atoms[k] * result.moles[t.candidate];
+      }
     }
   }
   result.element_residual = 0.0;

@@ -14,6 +14,7 @@
 
 #include <cstddef>
 #include <cstdint>
+#include <memory>
 #include <stdexcept>
 #include <string>
 #include <string_view>
@@ -23,6 +24,9 @@
 #include "core/species_database.hpp"
 
 namespace stackbound::core {
+
+struct EquilibriumTables;  // the solver's precomputed species rows (core/equilibrium.cpp)
+struct EquilibriumTerm;    // one species' rows in the Newton system (core/equilibrium.cpp)
 
 struct EquilibriumResult {
   double temperature_K = 0.0;
@@ -118,10 +122,16 @@ class EquilibriumSolver {
     std::array<double, 7> below_mid{};
     std::array<double, 7> above_mid{};
     double mid_K = 0.0;
-    std::array<double, kElementCount> log_atoms{};  // ln a_kj (0 where absent)
+    double atom_count = 0.0;                          // atoms per molecule
+    int element_count = 0;                            // entries of `elements`
+    std::array<std::size_t, kElementCount> elements{};  // indices k with atoms[k] > 0
   };
   friend struct EquilibriumWork;
   void check_temperature(double temperature_K) const;
+  // Balance rows of every candidate made only of `active` elements; row_of[k] = row of element k or -1.
+  void build_terms(const std::array<bool, kElementCount>& active, const std::array<int, kElementCount>& row_of,
+                   std::vector<EquilibriumTerm>& gas, std::vector<EquilibriumTerm>& condensed) const;
+  static std::array<int, kElementCount> rows_of(const std::array<bool, kElementCount>& independent);
   // Elements (by known_elements() index) whose balance rows are linearly independent over the given
   // active elements and candidates (a restricted product list may make rows dependent).
   [[nodiscard]] std::array<bool, kElementCount> independent_rows(const std::array<bool, kElementCount>& active) const;
@@ -131,6 +141,7 @@ class EquilibriumSolver {
   std::size_t gas_count_ = 0;
   std::array<bool, kElementCount> element_allowed_{};
   std::array<bool, kElementCount> independent_all_{};  // independent_rows(element_allowed_)
+  std::shared_ptr<const EquilibriumTables> tables_;    // species rows for every element present
   double min_temperature_K_ = 0.0;
   double max_temperature_K_ = 0.0;
   double covered_low_K_ = 0.0;  // from here to max_temperature_K_ every candidate's range applies

@@ -103,6 +103,7 @@ std::string replace_all(std::string text, std::string_view from, std::string_vie
 // "µg/Nm³" -> "ug/Nm3"; "mg/Nm^3" -> "mg/Nm3".
 std::string normalise_symbol(std::string_view symbol) {
   std::string text(symbol);
+  if (text.find_first_of("^\xC2\xCE") == std::string::npos) return text;  // nothing to replace (the usual case)
   text = replace_all(text, "\xC2\xB3", "3");  // superscript three
   text = replace_all(text, "^3", "3");
   text = replace_all(text, "\xC2\xB5", "u");  // micro sign
@@ -250,7 +251,7 @@ void apply_item(PartialBasis& basis, std::string_view item, std::string_view fie
 
 const units::NormalConditions* resolve_normal(const ConcentrationUnit& unit, const units::NormalConditions* named,
                                               const units::NormalConditions* default_normal, std::string_view field,
-                                              const std::string& written) {
+                                              std::string_view written) {
   switch (unit.normal_rule) {
     case NormalRule::not_applicable:
       if (named != nullptr) {
@@ -358,31 +359,32 @@ ConcentrationUnit mass_unit(std::string_view symbol, const units::NormalConditio
         "gr/dscf, lb/dscf, lb/scf and other {{ng, ug, mg, g, kg, gr, lb}}/{{Nm3, m3, Sm3, dscm, dscf, scf, ft3}}",
         symbol));
   }
-  unit->normal = resolve_normal(*unit, &normal, nullptr, "mass unit", std::string(symbol));
+  unit->normal = resolve_normal(*unit, &normal, nullptr, "mass unit", symbol);
   return *unit;
 }
 
 Basis make_basis(ConcentrationUnit unit, Moisture moisture, DiluentReference reference, bool as_no2,
                  std::string_view field) {
   Basis basis{std::move(unit), moisture, reference, as_no2};
-  const std::string written = basis.text();
+  // The basis text is written only into a rejection: make_basis runs on every conversion of a sweep.
+  const auto refuse = [&](const std::string& problem) { reject(field, basis.text(), problem); };
   if (basis.unit.is_mass() && basis.unit.normal == nullptr) {
-    reject(field, written, fmt::format("{} needs named normal conditions", basis.unit.symbol));
+    refuse(fmt::format("{} needs named normal conditions", basis.unit.symbol));
   }
   if (basis.unit.implied_moisture && *basis.unit.implied_moisture != moisture) {
-    reject(field, written, fmt::format("{} is a {} unit; it cannot be {}", unit_as_written(basis.unit),
-                                       moisture_name(*basis.unit.implied_moisture), moisture_name(moisture)));
+    refuse(fmt::format("{} is a {} unit; it cannot be {}", unit_as_written(basis.unit),
+                       moisture_name(*basis.unit.implied_moisture), moisture_name(moisture)));
   }
   if (moisture == Moisture::wet && reference.kind() != DiluentReference::Kind::as_measured) {
-    reject(field, written, fmt::format("{} on the wet basis: a concentration corrected to a reference O2 or CO2 is "
-                                       "defined on the dry basis; write \"dry, {}\"", reference.text(), reference.text()));
+    refuse(fmt::format("{} on the wet basis: a concentration corrected to a reference O2 or CO2 is defined on the dry "
+                       "basis; write \"dry, {}\"", reference.text(), reference.text()));
   }
   const double level = reference.dry_fraction();
   if (reference.kind() == DiluentReference::Kind::o2 && (!std::isfinite(level) || level < 0.0 || level >= 0.21)) {
-    reject(field, written, "an O2 level must be >= 0 % and below the O2 content of air (20.9 % or 21 %)");
+    refuse("an O2 level must be >= 0 % and below the O2 content of air (20.9 % or 21 %)");
   }
   if (reference.kind() == DiluentReference::Kind::co2 && (!std::isfinite(level) || level <= 0.0 || level > 1.0)) {
-    reject(field, written, "a CO2 level must be above 0 % and at most 100 %");
+    refuse("a CO2 level must be above 0 % and at most 100 %");
   }
   return basis;
 }

@@ -47,6 +47,10 @@ struct ConcentrationContext {
   std::optional<double> co2_dry_fraction;
   // b in the O2 correction: 20.9 % (US EPA practice, default) or 21 % (EU practice).
   O2Basis o2_basis = O2Basis::us_epa_20_9;
+  // false skips building the AppliedFactor list, for sweeps; values are identical. Honoured by
+  // Concentration::convert, method19_o2_dry/_wet, method19_co2 and screen_concentration, whose factor
+  // lists are then empty. Default true: reports show how each figure was formed.
+  bool record_factors = true;
 
   // From wet mole fractions of the stack gas (as the equilibrium or combustion result gives them):
   // O2_dry = O2_wet / (1 - H2O), CO2_dry likewise. Throws units::InputError for fractions outside
@@ -93,9 +97,10 @@ class Concentration {
   [[nodiscard]] const Pollutant& pollutant() const { return pollutant_; }
   [[nodiscard]] const Basis& basis() const { return basis_; }
 
-  // The same concentration on another basis, with the factors applied (in the order applied).
+  // The same concentration on another basis, with the factors applied (in the order applied; none
+  // when context.record_factors is false).
   [[nodiscard]] Conversion convert(const Basis& target, const ConcentrationContext& context) const;
-  // convert(...).result
+  // convert(...).result; never builds the factors.
   [[nodiscard]] Concentration to(const Basis& target, const ConcentrationContext& context) const;
 
   // "35 ppmv CO (dry, O2=7.2%)", "42.6 mg/Nm3 NOx (dry, O2=3%, as NO2, normal=0C)".

@@ -1,0 +1,22 @@
+#pragma once
+// The `fuel:` mapping of case files and fuel files: read into a FuelSpec (plain data, so sweeps can
+// change a blend fraction), then built into a core::Fuel. Keys: docs/case-file.md, section `fuel`.
+
+#include <string>
+
+#include "cases/case_definition.hpp"
+#include "cases/yaml_reader.hpp"
+#include "core/fuel.hpp"
+#include "core/species_database.hpp"
+
+namespace stackbound::cases {
+
+// Reads a fuel mapping. `blend_part`: a component of a blend (takes `fraction`, no `blend`, no feed
+// keys); otherwise the top-level fuel, which also allows `feed_rate` and `temperature` (read by the
+// caller). Throws units::InputError with file, line and column.
+FuelSpec read_fuel_spec(const YamlField& fuel, bool blend_part);
+
+// Builds the fuel; errors from the core layer are prefixed with the location of the offending node.
+core::Fuel build_fuel(const FuelSpec& spec, const core::SpeciesDatabase& database);
+
+}  // namespace stackbound::cases
