@@ -97,7 +97,7 @@ std::string percent(double fraction) { return fmt::format("{:.2f} %", fraction *
 }  // namespace
 
 RunResult run_case(const CaseDefinition& definition, const core::SpeciesDatabase& database, const RunOptions& options) {
-  const core::Fuel fuel = build_fuel(definition.fuel.fuel, database);
+  const core::Fuel fuel = options.fuel != nullptr ? *options.fuel : build_fuel(definition.fuel.fuel, database);
   const core::Oxidant oxidant = located(definition.origin, [&] { return build_oxidant(definition.air); });
   const core::OperatingPoint op = build_operating_point(definition);
   const core::CombustionResult combustion =
@@ -111,9 +111,14 @@ RunResult run_case(const CaseDefinition& definition, const core::SpeciesDatabase
   core::ElementAmounts elements;
   elements.moles = combustion.reactant_element_mol_per_kg;
   const FiringSpec& firing = definition.firing;
-  const core::EquilibriumSolver solver = located(firing.location, [&] {
-    return core::EquilibriumSolver(database, elements, firing.species);
-  });
+  std::array<bool, core::kElementCount> present{};
+  for (std::size_t k = 0; k < core::kElementCount; ++k) present[k] = elements.moles[k] > 0.0;
+  const bool reuse = options.solver != nullptr && options.solver_elements == present;
+  const std::shared_ptr<const core::EquilibriumSolver> solver_ptr =
+      reuse ? options.solver : located(firing.location, [&] {
+        return std::make_shared<const core::EquilibriumSolver>(database, elements, firing.species);
+      });
+  const core::EquilibriumSolver& solver = *solver_ptr;
   const core::EquilibriumResult* warm =
       options.warm_start != nullptr && options.warm_start->species == solver.species() ? options.warm_start : nullptr;
   const core::EquilibriumResult equilibrium = located(firing.location, [&] {
@@ -159,7 +164,8 @@ RunResult run_case(const CaseDefinition& definition, const core::SpeciesDatabase
   const double stack_o2 = equilibrium.mole_fraction("O2");
   const double stack_co2 = equilibrium.mole_fraction("CO2");
   const double wet_mol_per_s = equilibrium.total_gas_moles * feed.mass_flow_kg_per_s;
-  const em::ConcentrationContext context = em::ConcentrationContext::from_wet_flue_gas(stack_h2o, stack_o2, stack_co2, o2_basis);
+  em::ConcentrationContext context = em::ConcentrationContext::from_wet_flue_gas(stack_h2o, stack_o2, stack_co2, o2_basis);
+  context.record_factors = options.record_factors;
 
   RunResult result{
       .definition = definition,
@@ -168,6 +174,8 @@ RunResult run_case(const CaseDefinition& definition, const core::SpeciesDatabase
       .combustion = combustion,
       .rates = rates,
       .equilibrium = equilibrium,
+      .solver = solver_ptr,
+      .solver_elements = present,
       .firing_temperature_K = equilibrium.temperature_K,
       .firing_pressure_Pa = equilibrium.pressure_Pa,
       .stack_h2o_wet = stack_h2o,
@@ -210,16 +218,20 @@ RunResult run_case(const CaseDefinition& definition, const core::SpeciesDatabase
         .normal = &normal,
         .o2_basis = o2_basis,
         .operating_hours_per_year = definition.report.operating_hours_h,
+        .record_factors = options.record_factors,
     };
     em::StackEmission emission = em::evaluate_stack_emission(input);
     if (o2_basis != em::O2Basis::us_epa_20_9) {
       // Method 19 is written with 20.9 % O2 whatever the O2 basis of the concentration correction.
       em::ConcentrationContext method19_context = context;
       method19_context.o2_basis = em::O2Basis::us_epa_20_9;
+      method19_context.record_factors = options.record_factors;
       emission.method19 = em::method19_o2_dry(emission.ppmvd, fd, method19_context);
     }
     result.pollutants.push_back({name, input.pollutant_wet_fraction, std::move(emission)});
   }
+
+  if (!options.limits_and_measurements) return result;
 
   // Limits: a concentration limit (unit of concentration) or a rate limit (kg/h, lb/MMBtu ...).
   for (const LimitSpec& limit : definition.report.limits) {

@@ -9,6 +9,8 @@
 // Each step is a library call of core/ or emissions/; the runner only wires them and keeps the
 // numbers a report shows. A run_case() call and the same calls made by hand give identical numbers.
 
+#include <array>
+#include <memory>
 #include <optional>
 #include <string>
 #include <vector>
@@ -55,6 +57,9 @@ struct RunResult {
   core::CombustionResult combustion;    // per kg of fuel, complete combustion
   core::CombustionRates rates;          // scaled to the feed
   core::EquilibriumResult equilibrium;  // per kg of fuel, at the firing conditions
+  // The solver used, and the elements it was built for; a sweep hands it to the next point.
+  std::shared_ptr<const core::EquilibriumSolver> solver;
+  std::array<bool, core::kElementCount> solver_elements{};
   double firing_temperature_K = 0.0;
   double firing_pressure_Pa = 0.0;
 
@@ -86,6 +91,17 @@ struct RunOptions {
   // Seeds the equilibrium iteration (sweeps pass their neighbour's result). Must come from a run
   // with the same product candidates; otherwise it is ignored.
   const core::EquilibriumResult* warm_start = nullptr;
+  // Keep the list of conversion factors behind each figure (for reports that explain them). Sweeps
+  // switch it off: the values are identical, the work much less.
+  bool record_factors = true;
+  // The fuel, already built from definition.fuel.fuel (sweeps that do not vary the fuel build it once).
+  const core::Fuel* fuel = nullptr;
+  // A solver to reuse (from an earlier RunResult of the same case with other parameters): used when it
+  // was built for the same elements; the caller guarantees the same firing.species.
+  std::shared_ptr<const core::EquilibriumSolver> solver;
+  std::array<bool, core::kElementCount> solver_elements{};
+  // Screen against report.limits and compare with stack.measured. Sweeps, which print neither, skip it.
+  bool limits_and_measurements = true;
 };
 
 // Runs one case. Throws units::InputError with the case file's location for bad input, and

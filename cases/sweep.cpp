@@ -8,6 +8,7 @@
 
 #include <fmt/format.h>
 
+#include "cases/fuel_spec.hpp"
 #include "core/equilibrium.hpp"
 #include "units/input_error.hpp"
 #include "units/nearest_name.hpp"
@@ -193,18 +194,38 @@ std::vector<double> values_at(const std::vector<VarySpec>& vary, std::size_t ind
   return values;
 }
 
+// One worker's state between its points: the previous equilibrium (warm start), the solver, and the
+// fuel, built once when no point changes it.
+struct WorkerState {
+  std::optional<core::EquilibriumResult> previous;
+  std::shared_ptr<const core::EquilibriumSolver> solver;
+  std::array<bool, core::kElementCount> solver_elements{};
+  std::optional<core::Fuel> fuel;
+};
+
 void run_point(const CaseDefinition& base, const std::vector<VarySpec>& vary, const core::SpeciesDatabase& database,
-               SweepPoint& point, std::optional<core::EquilibriumResult>& warm) {
+               SweepPoint& point, WorkerState& state) {
   try {
     CaseDefinition definition = base;
-    for (std::size_t k = 0; k < vary.size(); ++k) apply_parameter(definition, vary[k].parameter, point.values[k]);
+    bool fuel_varied = false;
+    for (std::size_t k = 0; k < vary.size(); ++k) {
+      apply_parameter(definition, vary[k].parameter, point.values[k]);
+      fuel_varied = fuel_varied || vary[k].parameter == SweepParameter::blend_fraction;
+    }
+    if (!fuel_varied && !state.fuel) state.fuel = build_fuel(definition.fuel.fuel, database);
     RunOptions options;
-    options.warm_start = warm ? &*warm : nullptr;
+    options.record_factors = false;
+    options.limits_and_measurements = false;
+    options.fuel = fuel_varied ? nullptr : &*state.fuel;
+    options.warm_start = state.previous ? &*state.previous : nullptr;
+    options.solver = state.solver;
+    options.solver_elements = state.solver_elements;
     point.result = run_case(definition, database, options);
-    warm = point.result->equilibrium;
+    state.previous = point.result->equilibrium;
+    state.solver = point.result->solver;
+    state.solver_elements = point.result->solver_elements;
   } catch (const std::exception& error) {
     point.error = error.what();
-    warm.reset();
   }
 }
 
@@ -216,7 +237,7 @@ std::size_t run_sweep(const CaseDefinition& base, const std::vector<VarySpec>& v
   const std::size_t total = sweep_size(vary);
   const unsigned threads = std::max(1u, options.threads != 0 ? options.threads : std::thread::hardware_concurrency());
   const std::size_t batch_points = std::max<std::size_t>(options.batch_points, threads);
-  std::vector<std::optional<core::EquilibriumResult>> warm(threads);
+  std::vector<WorkerState> workers_state(threads);
   std::vector<SweepPoint> batch;
   std::size_t failed = 0;
   for (std::size_t start = 0; start < total; start += batch_points) {
@@ -233,7 +254,7 @@ std::size_t run_sweep(const CaseDefinition& base, const std::vector<VarySpec>& v
       const std::size_t end = std::min(count, begin + slice);
       if (begin >= end) break;
       workers.emplace_back([&, t, begin, end] {
-        for (std::size_t i = begin; i < end; ++i) run_point(base, vary, database, batch[i], warm[t]);
+        for (std::size_t i = begin; i < end; ++i) run_point(base, vary, database, batch[i], workers_state[t]);
       });
     }
     for (std::thread& worker : workers) worker.join();

@@ -3,6 +3,7 @@
 #include <unistd.h>
 
 #include <cstdio>
+#include <iterator>
 #include <map>
 
 #include <fmt/format.h>
@@ -110,18 +111,19 @@ class CsvSweepWriter {
   }
 
   void write_row(const SweepPoint& point) {
-    std::string line = std::to_string(point.index + 1);
+    fmt::memory_buffer line;
+    fmt::format_to(std::back_inserter(line), "{}", point.index + 1);
     for (std::size_t k = 0; k < vary_.size(); ++k) {
-      line += fmt::format(",{:.10g}", sweep_parameter_display(vary_[k].parameter, point.values[k]));
+      fmt::format_to(std::back_inserter(line), ",{:.10g}", sweep_parameter_display(vary_[k].parameter, point.values[k]));
     }
-    line += point.result ? ",ok" : ",failed";
     if (point.result) {
-      for (const double value : run_metric_values(*point.result)) line += fmt::format(",{:.8g}", value);
+      fmt::format_to(std::back_inserter(line), ",ok");
+      for (const double value : run_metric_values(*point.result)) fmt::format_to(std::back_inserter(line), ",{:.8g}", value);
+      fmt::format_to(std::back_inserter(line), ",\n");
     } else {
-      line += std::string(metric_count_, ',');
+      fmt::format_to(std::back_inserter(line), ",failed{},{}\n", std::string(metric_count_, ','), csv_cell(point.error));
     }
-    line += "," + csv_cell(point.error) + "\n";
-    out_.write(line);
+    out_.write(std::string_view(line.data(), line.size()));
   }
 
   OutputStream& out_;

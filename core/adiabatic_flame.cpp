@@ -73,8 +73,9 @@ EquilibriumResult EquilibriumSolver::solve_hp(const ElementAmounts& b, double ta
     double cp = current.equilibrium_heat_capacity_J_per_K;
     if (!(cp > 0.0) || !std::isfinite(cp)) cp = current.frozen_heat_capacity_J_per_K;
     const double newton_K = -excess_J / cp;
-    if (std::abs(newton_K) <= options_.temperature_tolerance_K ||
-        bracket_high_K - bracket_low_K <= options_.temperature_tolerance_K) {
+    const bool bracket_closed =
+        low_evaluated && high_evaluated && bracket_high_K - bracket_low_K <= options_.temperature_tolerance_K;
+    if (std::abs(newton_K) <= options_.temperature_tolerance_K || bracket_closed) {
       current.iterations = iterations;
       current.temperature_iterations = step;
       return current;

@@ -3,9 +3,6 @@
 #include <algorithm>
 #include <cmath>
 #include <limits>
-#ifdef EQ_TRACE
-#include <cstdio>
-#endif
 
 #include <Eigen/Dense>
 #include <fmt/format.h>
@@ -87,9 +84,9 @@ constexpr double kStateFloorLogFraction = -1.0e5;
 constexpr double kWarmZeroLogFraction = -50.0;
 // A warm start is used when its temperature is within a factor e^0.3 (about 35 %) of the new one.
 constexpr double kWarmStartLogTemperatureRange = 0.3;
-// Within e^1e-4 (0.01 %) the warm start's element potentials are used directly (an HP Newton step
-// on T, a sweep in pressure or feed); beyond, its amounts are the better start.
-constexpr double kPotentialStartLogTemperatureRange = 1e-4;
+// Within e^0.05 (about 5 %) the warm start's element potentials, carried along their temperature
+// slopes, seed the solve; beyond, its amounts are the better start.
+constexpr double kPotentialStartLogTemperatureRange = 0.05;
 // Condensed phase entry: g_c/RT - sum_k a_kc pi_k below this (dimensionless) admits the species.
 constexpr double kPhaseEntryTolerance = -1e-10;
 constexpr int kMaxPhaseChanges = 20;
@@ -178,7 +175,8 @@ Eigen::VectorXd nonnegative_least_squares(const Eigen::MatrixXd& A, const Eigen:
 // single-element species. Returns false (caller uses a uniform start) if the simplex stalls.
 bool linear_programming_start(const std::vector<Term>& gas, const std::vector<Term>& condensed, int E,
                               const std::array<double, kElementCount>& bs, std::vector<double>& lnn, double& lnN,
-                              std::vector<double>& nc, std::vector<char>& included) {
+                              std::vector<double>& nc, std::vector<char>& included,
+                              std::array<int, kElementCount>& optimal_basis) {
   const int S = static_cast<int>(gas.size());
   const int n = S + static_cast<int>(condensed.size());
   const auto term = [&](int j) -> const Term& {
@@ -292,6 +290,7 @@ bool linear_programming_start(const std::vector<Term>& gas, const std::vector<Te
       included[static_cast<std::size_t>(j - S)] = 1;
     }
   }
+  optimal_basis = basis;
   return true;
 }
 
@@ -654,6 +653,7 @@ EquilibriumResult EquilibriumWork::solve(const EquilibriumSolver& solver, const 
   double lnN = std::log(0.1);
   bool warm_used = false;
   bool polished_start = false;  // the gas amounts already satisfy mu_j/RT = sum_k a_kj pi_k
+  std::array<double, kElementCount> pi{};
   // A warm start far from T (a sweep's jump) converges slower than the linear-programming start.
   const double warm_log_temperature_change =
       warm != nullptr ? std::abs(std::log(warm->temperature_K / T)) : std::numeric_limits<double>::infinity();
@@ -663,28 +663,40 @@ EquilibriumResult EquilibriumWork::solve(const EquilibriumSolver& solver, const 
     for (std::size_t i = 0; i < solver.candidates_.size(); ++i) atoms += solver.candidates_[i].atom_count * warm->moles[i];
     double gas_total = 0.0;
     for (const Term& t : gas) gas_total += warm->moles[t.candidate];
-    // Near the warm start's temperature its element potentials give every gas amount at once, in
-    // equilibrium with each other at the new T and P (ln n_j = ln n - g_j/RT + sum_k a_kj pi_k); each
-    // element present now must have been present then.
+    // Near the warm start's temperature its element potentials, carried to the new T along their
+    // temperature slopes (a first-order predictor), give every gas amount at once, in equilibrium
+    // with each other at the new T: ln n_j = ln n - g_j/RT + sum_k a_kj pi_k. Each element present
+    // now must have been present then.
+    const double log_temperature_step = std::log(T / warm->temperature_K);
+    // Only at the same pressure: otherwise the predicted mole fractions would not sum to 1, a start
+    // the iteration recovers from only slowly.
     bool potentials_usable = warm_log_temperature_change <= kPotentialStartLogTemperatureRange &&
-                             warm->element_potentials.size() == kElementCount;
+                             std::abs(std::log(P / warm->pressure_Pa)) <= 1e-12;
     for (int r = 0; r < E && potentials_usable; ++r) {
       const std::size_t k = element_of_row[static_cast<std::size_t>(r)];
       bool carried = false;
       for (std::size_t i = 0; i < solver.candidates_.size() && !carried; ++i) {
         carried = solver.candidates_[i].atoms[k] > 0.0 && warm->moles[i] > 0.0;
       }
-      potentials_usable = carried && std::isfinite(warm->element_potentials[k]);
+      potentials_usable = carried && std::isfinite(warm->element_potentials[k]) &&
+                          std::isfinite(warm->element_potential_slopes[k]);
+    }
+    if (potentials_usable) {
+      for (int r = 0; r < E; ++r) {
+        const std::size_t k = element_of_row[static_cast<std::size_t>(r)];
+        pi[static_cast<std::size_t>(r)] =
+            warm->element_potentials[k] + warm->element_potential_slopes[k] * log_temperature_step;
+      }
     }
     if (atoms > 0.0 && std::isfinite(atoms) && gas_total > 0.0) {
       lnN = std::log(gas_total / atoms);
+      if (potentials_usable && std::isfinite(warm->gas_moles_slope)) lnN += warm->gas_moles_slope * log_temperature_step;
       for (std::size_t j = 0; j < S; ++j) {
         const Term& t = gas[j];
         if (potentials_usable) {
           double ln_fraction = -t.g;
           for (int p = 0; p < t.count; ++p) {
-            const std::size_t k = element_of_row[static_cast<std::size_t>(t.row[static_cast<std::size_t>(p)])];
-            ln_fraction += t.atoms[static_cast<std::size_t>(p)] * warm->element_potentials[k];
+            ln_fraction += t.atoms[static_cast<std::size_t>(p)] * pi[static_cast<std::size_t>(t.row[static_cast<std::size_t>(p)])];
           }
           lnn[j] = std::max(ln_fraction, kStateFloorLogFraction) + lnN;
         } else {
@@ -705,26 +717,48 @@ EquilibriumResult EquilibriumWork::solve(const EquilibriumSolver& solver, const 
       polished_start = potentials_usable;
     }
   }
-#ifdef EQ_TRACE
-  fprintf(stderr, "warm_used %d polished %d\n", warm_used, polished_start);
-#endif
-  if (!warm_used && !linear_programming_start(gas, condensed, E, bs, lnn, lnN, nc, included)) {
-    const double each = std::log(0.1 / static_cast<double>(S));
-    std::fill(lnn.begin(), lnn.end(), each);
-  }
-
-#ifdef EQ_TRACE
-  for (std::size_t j = 0; j < S; ++j) fprintf(stderr, "init %s %.3f\n", solver.names_[gas[j].candidate].c_str(), lnn[j]-lnN);
-  for (std::size_t c = 0; c < C; ++c) fprintf(stderr, "init %s %g %d\n", solver.names_[condensed[c].candidate].c_str(), nc[c], included[c]);
-#endif
-  std::vector<double> n(S);
-  std::vector<double> mu(S);
-  std::array<double, kElementCount> pi{};
-  if (polished_start) {
-    for (int r = 0; r < E; ++r) {
-      pi[static_cast<std::size_t>(r)] = warm->element_potentials[element_of_row[static_cast<std::size_t>(r)]];
+  std::array<int, kElementCount> lp_basis{};
+  if (!warm_used) {
+    if (!linear_programming_start(gas, condensed, E, bs, lnn, lnN, nc, included, lp_basis)) {
+      const double each = std::log(0.1 / static_cast<double>(S));
+      std::fill(lnn.begin(), lnn.end(), each);
+    } else {
+      // Element potentials that make the basis species' chemical potentials, mixing terms included,
+      // exact: sum_k a_kb pi_k = g_b/RT + ln(n_b/n) (gas), = g_b/RT (condensed). Every other gas
+      // species then starts in equilibrium with them, unless that overfills the gas (sum x >> 1).
+      Matrix basis_matrix = Matrix::Zero(E, E);
+      Vector potentials_rhs(E);
+      for (int r = 0; r < E; ++r) {
+        const int j = lp_basis[static_cast<std::size_t>(r)];
+        const bool is_gas = j < static_cast<int>(S);
+        const Term& t = is_gas ? gas[static_cast<std::size_t>(j)] : condensed[static_cast<std::size_t>(j) - S];
+        for (int p = 0; p < t.count; ++p) basis_matrix(r, t.row[static_cast<std::size_t>(p)]) = t.atoms[static_cast<std::size_t>(p)];
+        potentials_rhs[r] = t.g + (is_gas ? lnn[static_cast<std::size_t>(j)] - lnN : 0.0);
+      }
+      const Vector potentials = basis_matrix.partialPivLu().solve(potentials_rhs);
+      if (potentials.allFinite()) {
+        std::vector<double> polished(S);
+        double fraction_sum = 0.0;
+        for (std::size_t j = 0; j < S; ++j) {
+          const Term& t = gas[j];
+          double ln_fraction = -t.g;
+          for (int p = 0; p < t.count; ++p) {
+            ln_fraction += t.atoms[static_cast<std::size_t>(p)] * potentials[t.row[static_cast<std::size_t>(p)]];
+          }
+          polished[j] = std::max(ln_fraction, kStateFloorLogFraction) + lnN;
+          fraction_sum += std::exp(std::min(ln_fraction, 50.0));
+        }
+        if (fraction_sum < 1.5) {
+          lnn = std::move(polished);
+          for (int r = 0; r < E; ++r) pi[static_cast<std::size_t>(r)] = potentials[r];
+          polished_start = true;
+        }
+      }
     }
   }
+
+  std::vector<double> n(S);
+  std::vector<double> mu(S);
   Matrix M;
   Vector rhs;
   Vector x;
@@ -954,11 +988,6 @@ EquilibriumResult EquilibriumWork::solve(const EquilibriumSolver& solver, const 
     }
     const double lambda1 = largest > 2.0 ? 2.0 / largest : 1.0;
     const double lambda = std::min({1.0, lambda1, lambda2});
-#ifdef EQ_TRACE
-    { std::size_t w = 0; double wv = -1; for (std::size_t j = 0; j < S; ++j) { double v = n[j]*std::abs(mu[j]); if (v > wv) { wv = v; w = j; } }
-      fprintf(stderr, "   worst %s n=%.3e d=%.3f\n", solver.names_[gas[w].candidate].c_str(), n[w], mu[w]); }
-    fprintf(stderr, "it %d res %.2e mres %.2e lam1 %.3g lam2 %.3g dlnN %.3g inc %d\n", iterations, element_residual, moles_residual, lambda1, lambda2, dlnN, included_count);
-#endif
     full_step = lambda >= 1.0;
     const double lnN_new = lnN + lambda * dlnN;
     for (std::size_t j = 0; j < S; ++j) {
@@ -1001,6 +1030,9 @@ EquilibriumResult EquilibriumWork::solve(const EquilibriumSolver& solver, const 
     rhs_T[condensed_position[c]] = -condensed[c].h;
   }
   double equilibrium_cp = frozen_cp;
+  std::array<double, kElementCount> result_potential_slopes{};
+  double result_gas_moles_slope = std::numeric_limits<double>::quiet_NaN();
+  result_potential_slopes.fill(std::numeric_limits<double>::quiet_NaN());
   // The factorisation of the last Newton step serves: its matrix differs from the one at the
   // solution by the last (converged) correction, far below the accuracy a heat capacity needs.
   if (iterations == 0) {  // converged at the start: factorise the matrix at the solution
@@ -1010,6 +1042,10 @@ EquilibriumResult EquilibriumWork::solve(const EquilibriumSolver& solver, const 
     const Vector derivative = lu.solve(rhs_T);
     if (derivative.allFinite()) {
       const double dlnN = derivative[nrow];
+      result_gas_moles_slope = dlnN;
+      for (int r = 0; r < E; ++r) {
+        result_potential_slopes[element_of_row[static_cast<std::size_t>(r)]] = derivative[r];
+      }
       for (std::size_t j = 0; j < S; ++j) {
         const Term& t = gas[j];
         double dln = dlnN + t.h;
@@ -1050,8 +1086,10 @@ EquilibriumResult EquilibriumWork::solve(const EquilibriumSolver& solver, const 
   result.enthalpy_J = enthalpy * kR * T * scale;
   result.frozen_heat_capacity_J_per_K = frozen_cp * kR * scale;
   result.equilibrium_heat_capacity_J_per_K = equilibrium_cp * kR * scale;
-  result.element_potentials.assign(kElementCount, 0.0);
+  result.element_potentials.fill(0.0);
   for (int r = 0; r < E; ++r) result.element_potentials[element_of_row[static_cast<std::size_t>(r)]] = pi[static_cast<std::size_t>(r)];
+  result.element_potential_slopes = result_potential_slopes;
+  result.gas_moles_slope = result_gas_moles_slope;
 
   // Element balances of the reported amounts, every active element (dependent rows included).
   ElementAmounts products;

@@ -12,6 +12,7 @@
 // converge within the iteration limit, which is reported with the diagnostics, never hidden.
 // The HP problem (adiabatic flame) is solve_hp(), implemented in core/adiabatic_flame.cpp.
 
+#include <array>
 #include <cstddef>
 #include <cstdint>
 #include <memory>
@@ -41,7 +42,12 @@ struct EquilibriumResult {
   double enthalpy_J = 0.0;             // total H of the products at T (formation enthalpies included)
   double frozen_heat_capacity_J_per_K = 0.0;       // sum n_j cp_j, composition fixed
   double equilibrium_heat_capacity_J_per_K = 0.0;  // dH/dT at fixed P with the composition shifting
-  std::vector<double> element_potentials;  // pi_k = lambda_k/RT per known_elements() index (0 if absent)
+  // pi_k = lambda_k/RT per known_elements() index (0 for an element absent or in a dependent row).
+  std::array<double, kElementCount> element_potentials{};
+  // d pi_k / d ln T and d ln(n_gas) / d ln T at fixed P along the equilibrium (NaN where unknown);
+  // they let a warm start at a nearby temperature begin from a first-order prediction.
+  std::array<double, kElementCount> element_potential_slopes{};
+  double gas_moles_slope = 0.0;
   int temperature_iterations = 0;          // HP only: Newton steps on T
   std::uint64_t species_key = 0;           // identifies the solver's product list (for warm starts)
 

@@ -333,7 +333,7 @@ std::optional<ConcentrationUnit> find_concentration_unit(std::string_view symbol
   const auto v = std::find_if(kVolumeParts.begin(), kVolumeParts.end(), [&](const VolumePart& p) { return p.symbol == volume; });
   if (m == kMassParts.end() || v == kVolumeParts.end()) return std::nullopt;
   ConcentrationUnit unit;
-  unit.symbol = fmt::format("{}/{}", m->symbol, v->symbol);
+  unit.symbol.append(m->symbol).append("/").append(v->symbol);
   unit.kind = UnitKind::mass_per_normal_volume;
   unit.factor = m->kg;
   unit.volume_m3 = v->m3;

@@ -1,6 +1,7 @@
 #include "emissions/concentration.hpp"
 
 #include <cmath>
+#include <utility>
 
 #include <fmt/format.h>
 
@@ -36,23 +37,39 @@ double need_measured(const std::optional<double>& level, ContextPiece piece, con
   return *level;
 }
 
-void push_o2(std::vector<AppliedFactor>& factors, double& working, double from, double to, O2Basis basis,
-             std::string_view from_label, std::string_view to_label) {
+// The factors of one conversion, in the order applied. When not recording (a sweep), nothing is
+// built: `detail` is a callable that writes the detail text, called only for a recorded factor.
+class FactorLog {
+ public:
+  explicit FactorLog(bool record) : record_(record) {}
+  template <typename Detail>
+  void add(std::string_view name, double value, std::string_view unit, Detail&& detail) {
+    if (record_) factors_.push_back({std::string(name), value, std::string(unit), std::forward<Detail>(detail)()});
+  }
+  [[nodiscard]] std::vector<AppliedFactor> take() { return std::move(factors_); }
+
+ private:
+  bool record_;
+  std::vector<AppliedFactor> factors_;
+};
+
+void push_o2(FactorLog& factors, double& working, double from, double to, O2Basis basis, std::string_view from_label,
+             std::string_view to_label) {
   const double factor = o2_correction_factor(from, to, basis, from_label, to_label);
   working *= factor;
-  factors.push_back({"O2 correction factor", factor, "1", o2_correction_text(from, to, basis)});
+  factors.add("O2 correction factor", factor, "1", [&] { return o2_correction_text(from, to, basis); });
 }
 
-void push_co2(std::vector<AppliedFactor>& factors, double& working, double from, double to, std::string_view from_label,
+void push_co2(FactorLog& factors, double& working, double from, double to, std::string_view from_label,
               std::string_view to_label) {
   const double factor = co2_correction_factor(from, to, from_label, to_label);
   working *= factor;
-  factors.push_back({"CO2 correction factor", factor, "1", co2_correction_text(from, to)});
+  factors.add("CO2 correction factor", factor, "1", [&] { return co2_correction_text(from, to); });
 }
 
 // Dry basis: from one diluent level to another, through "as measured" when the kinds differ.
 void change_level(const DiluentReference& from, const DiluentReference& to, const ConcentrationContext& context,
-                  double& working, std::vector<AppliedFactor>& factors) {
+                  double& working, FactorLog& factors) {
   using Kind = DiluentReference::Kind;
   constexpr std::string_view kSourceO2 = "O2 level of the source basis";
   constexpr std::string_view kTargetO2 = "O2 level of the target basis";
@@ -82,11 +99,11 @@ void change_level(const DiluentReference& from, const DiluentReference& to, cons
   }
 }
 
-AppliedFactor molar_volume_factor(const ConcentrationUnit& unit, std::string_view side) {
+void push_molar_volume(FactorLog& factors, const ConcentrationUnit& unit) {
   const units::NormalConditions& normal = *unit.normal;
-  return {std::string(side.empty() ? "molar volume" : fmt::format("molar volume ({})", side)),
-          normal.molar_volume_m3_per_mol() * 1e3, "L/mol",
-          fmt::format("ideal gas, V_m = R T / p at {} (R = 8.314462618 J/(mol K), CODATA 2018)", normal.description)};
+  factors.add("molar volume", normal.molar_volume_m3_per_mol() * 1e3, "L/mol", [&] {
+    return fmt::format("ideal gas, V_m = R T / p at {} (R = 8.314462618 J/(mol K), CODATA 2018)", normal.description);
+  });
 }
 
 std::string molar_mass_detail(const Pollutant& pollutant, bool as_no2) {
@@ -102,7 +119,19 @@ Basis adapt_basis(Basis basis, const Pollutant& pollutant, std::string_view fiel
     throw units::InputError(fmt::format("{} = \"{}\": \"as NO2\" applies to NO, NO2 and NOx only, not to {}", field,
                                         basis.text(), pollutant.name));
   }
-  return make_basis(basis.unit, basis.moisture, basis.reference, basis.as_no2, field);
+  return make_basis(std::move(basis.unit), basis.moisture, basis.reference, basis.as_no2, field);
+}
+
+// The molar mass of a mass basis; the message text for an unknown one is formed only then.
+double molar_mass_for(const Pollutant& pollutant, bool as_no2, const Basis& source, const Basis& target) {
+  if (as_no2 || pollutant.has_molar_mass()) return basis_molar_mass_kg_per_mol(pollutant, as_no2, "");
+  return basis_molar_mass_kg_per_mol(pollutant, as_no2,
+                                     fmt::format("to convert {} to {}", source.unit.symbol, target.unit.symbol));
+}
+
+const ConcentrationUnit& ppmv_unit() {
+  static const ConcentrationUnit unit = mole_unit("ppmv");
+  return unit;
 }
 
 }  // namespace
@@ -165,14 +194,14 @@ Concentration::Concentration(double value, Pollutant pollutant, Basis basis, std
 Concentration Concentration::from_mole_fraction(double mole_fraction, Pollutant pollutant, Moisture moisture) {
   const bool as_no2 = pollutant.expressed_as_no2;
   return Concentration(mole_fraction * 1e6, std::move(pollutant),
-                       make_basis(mole_unit("ppmv"), moisture, DiluentReference::as_measured(), as_no2),
+                       make_basis(ppmv_unit(), moisture, DiluentReference::as_measured(), as_no2),
                        "mole fraction");
 }
 
 Conversion Concentration::convert(const Basis& target_in, const ConcentrationContext& context) const {
-  const Basis target = adapt_basis(target_in, pollutant_, "target basis");
+  Basis target = adapt_basis(target_in, pollutant_, "target basis");
   const Basis& source = basis_;
-  std::vector<AppliedFactor> factors;
+  FactorLog factors(context.record_factors);
 
   // 1. unit -> SI working value: mole fraction, or kg of pollutant per mol of gas.
   double working = source.unit.is_mass() ? value_ * source.unit.kg_per_mol_per_unit() : value_ * source.unit.factor;
@@ -184,48 +213,51 @@ Conversion Concentration::convert(const Basis& target_in, const ConcentrationCon
       const double moisture = need_moisture(context, source, target);
       const double factor = 1.0 / (1.0 - moisture);
       working *= factor;
-      factors.push_back({"dry/wet factor", factor, "1", fmt::format("wet -> dry: 1/(1 - {}), moisture {} %",
-                                                                    number_text(moisture), percent_text(moisture))});
+      factors.add("dry/wet factor", factor, "1", [&] {
+        return fmt::format("wet -> dry: 1/(1 - {}), moisture {} %", number_text(moisture), percent_text(moisture));
+      });
     }
     if (!same_level) change_level(source.reference, target.reference, context, working, factors);
     if (target.moisture == Moisture::wet) {
       const double moisture = need_moisture(context, source, target);
       const double factor = 1.0 - moisture;
       working *= factor;
-      factors.push_back({"dry/wet factor", factor, "1", fmt::format("dry -> wet: 1 - {}, moisture {} %",
-                                                                    number_text(moisture), percent_text(moisture))});
+      factors.add("dry/wet factor", factor, "1", [&] {
+        return fmt::format("dry -> wet: 1 - {}, moisture {} %", number_text(moisture), percent_text(moisture));
+      });
     }
   }
 
   // 5. mole <-> mass through the molar mass.
   const bool source_mass = source.unit.is_mass();
   const bool target_mass = target.unit.is_mass();
-  const std::string purpose = fmt::format("to convert {} to {}", source.unit.symbol, target.unit.symbol);
   if (!source_mass && target_mass) {
-    const double molar_mass = basis_molar_mass_kg_per_mol(pollutant_, target.as_no2, purpose);
+    const double molar_mass = molar_mass_for(pollutant_, target.as_no2, source, target);
     working *= molar_mass;
-    factors.push_back({"molar mass", molar_mass * 1e3, "g/mol", molar_mass_detail(pollutant_, target.as_no2)});
-    factors.push_back(molar_volume_factor(target.unit, ""));
+    factors.add("molar mass", molar_mass * 1e3, "g/mol", [&] { return molar_mass_detail(pollutant_, target.as_no2); });
+    push_molar_volume(factors, target.unit);
   } else if (source_mass && !target_mass) {
-    const double molar_mass = basis_molar_mass_kg_per_mol(pollutant_, source.as_no2, purpose);
+    const double molar_mass = molar_mass_for(pollutant_, source.as_no2, source, target);
     working /= molar_mass;
-    factors.push_back({"molar mass", molar_mass * 1e3, "g/mol", molar_mass_detail(pollutant_, source.as_no2)});
-    factors.push_back(molar_volume_factor(source.unit, ""));
+    factors.add("molar mass", molar_mass * 1e3, "g/mol", [&] { return molar_mass_detail(pollutant_, source.as_no2); });
+    push_molar_volume(factors, source.unit);
   } else if (source_mass && target_mass) {
     if (source.as_no2 != target.as_no2) {
-      const double from = basis_molar_mass_kg_per_mol(pollutant_, source.as_no2, purpose);
-      const double to = basis_molar_mass_kg_per_mol(pollutant_, target.as_no2, purpose);
+      const double from = molar_mass_for(pollutant_, source.as_no2, source, target);
+      const double to = molar_mass_for(pollutant_, target.as_no2, source, target);
       working *= to / from;
-      factors.push_back({"molar-mass ratio", to / from, "1",
-                         fmt::format("{} / {}", molar_mass_detail(pollutant_, target.as_no2),
-                                     molar_mass_detail(pollutant_, source.as_no2))});
+      factors.add("molar-mass ratio", to / from, "1", [&] {
+        return fmt::format("{} / {}", molar_mass_detail(pollutant_, target.as_no2),
+                           molar_mass_detail(pollutant_, source.as_no2));
+      });
     }
     if (source.unit.normal != target.unit.normal) {
       const double factor = source.unit.normal->molar_volume_m3_per_mol() / target.unit.normal->molar_volume_m3_per_mol();
-      factors.push_back({"normal-conditions factor", factor, "1",
-                         fmt::format("V_m({}) / V_m({}) = {} L/mol / {} L/mol (ideal gas)", source.unit.normal->key,
-                                     target.unit.normal->key, number_text(source.unit.normal->molar_volume_m3_per_mol() * 1e3),
-                                     number_text(target.unit.normal->molar_volume_m3_per_mol() * 1e3))});
+      factors.add("normal-conditions factor", factor, "1", [&] {
+        return fmt::format("V_m({}) / V_m({}) = {} L/mol / {} L/mol (ideal gas)", source.unit.normal->key,
+                           target.unit.normal->key, number_text(source.unit.normal->molar_volume_m3_per_mol() * 1e3),
+                           number_text(target.unit.normal->molar_volume_m3_per_mol() * 1e3));
+      });
     }
   }
 
@@ -234,11 +266,13 @@ Conversion Concentration::convert(const Basis& target_in, const ConcentrationCon
   if (!std::isfinite(value)) {
     throw units::InputError(fmt::format("{}: converting to \"{}\" overflows the range of numbers", text(), target.text()));
   }
-  return {Concentration(Unchecked{}, value, pollutant_, target), std::move(factors)};
+  return {Concentration(Unchecked{}, value, pollutant_, std::move(target)), factors.take()};
 }
 
 Concentration Concentration::to(const Basis& target, const ConcentrationContext& context) const {
-  return convert(target, context).result;
+  ConcentrationContext without_factors = context;
+  without_factors.record_factors = false;
+  return convert(target, without_factors).result;
 }
 
 std::string Concentration::text(int significant) const {

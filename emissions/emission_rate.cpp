@@ -22,11 +22,17 @@ std::string number_text(double value) { return fmt::format("{:.10g}", value); }
 
 // A mass-per-amount basis in kg per mol of gas: "kg/m3" at any resolved conditions, scaled back.
 Basis kg_per_mol_basis(Moisture moisture, DiluentReference reference, bool as_no2) {
-  return make_basis(mass_unit("kg/Nm3", units::normal_0C()), moisture, reference, as_no2, "internal basis");
+  static const ConcentrationUnit kg_per_Nm3 = mass_unit("kg/Nm3", units::normal_0C());
+  return make_basis(kg_per_Nm3, moisture, reference, as_no2, "internal basis");
 }
 
-double kg_per_mol(const Conversion& conversion) {
-  return conversion.result.value() * conversion.result.basis().unit.kg_per_mol_per_unit();
+const ConcentrationUnit& ppmv_unit() {
+  static const ConcentrationUnit unit = mole_unit("ppmv");
+  return unit;
+}
+
+double kg_per_mol(const Concentration& concentration) {
+  return concentration.value() * concentration.basis().unit.kg_per_mol_per_unit();
 }
 
 void check_positive(double value, std::string_view what, std::string_view unit) {
@@ -49,8 +55,9 @@ units::MassFlow mass_rate(const Concentration& concentration, const FlueGasFlow&
   if (!std::isfinite(flow_mol_per_s) || flow_mol_per_s < 0.0) {
     throw units::InputError(fmt::format("flue-gas flow = {} mol/s: must be a finite number >= 0", flow_mol_per_s));
   }
-  const Conversion c = concentration.convert(
-      kg_per_mol_basis(flow.moisture, DiluentReference::as_measured(), concentration.basis().as_no2), context);
+  const Concentration c =
+      concentration.to(kg_per_mol_basis(flow.moisture, DiluentReference::as_measured(), concentration.basis().as_no2),
+                       context);
   return units::kilograms_per_second(kg_per_mol(c) * flow_mol_per_s);
 }
 
@@ -161,29 +168,30 @@ AppliedFactor f_factor_entry(const FFactor& factor) {
 }  // namespace
 
 HeatInputRate method19_o2_dry(const Concentration& concentration, const FFactor& fd, const ConcentrationContext& context) {
-  const std::string method = "US EPA Method 19 Eq. 19-1 (O2-based, dry, Fd)";
-  require_kind(fd, FFactorKind::dry, method);
+  constexpr std::string_view kMethod = "US EPA Method 19 Eq. 19-1 (O2-based, dry, Fd)";
+  require_kind(fd, FFactorKind::dry, kMethod);
   // C_d * b/(b - %O2_d) is the dry concentration at 0 % O2.
-  const Conversion at_zero_o2 = concentration.convert(
+  Conversion at_zero_o2 = concentration.convert(
       kg_per_mol_basis(Moisture::dry, DiluentReference::o2(0.0), concentration.basis().as_no2), context);
-  HeatInputRate rate{kg_per_mol(at_zero_o2) * fd.gas_mol_per_J, method, at_zero_o2.factors};
-  rate.factors.push_back(f_factor_entry(fd));
+  HeatInputRate rate{kg_per_mol(at_zero_o2.result) * fd.gas_mol_per_J, std::string(kMethod),
+                     std::move(at_zero_o2.factors)};
+  if (context.record_factors) rate.factors.push_back(f_factor_entry(fd));
   return rate;
 }
 
 HeatInputRate method19_o2_wet(const Concentration& concentration, const FFactor& fw, double ambient_moisture_fraction,
                               const ConcentrationContext& context) {
-  const std::string method = "US EPA Method 19 (O2-based, wet, Fw, ambient moisture B_wa)";
-  require_kind(fw, FFactorKind::wet, method);
+  constexpr std::string_view kMethod = "US EPA Method 19 (O2-based, wet, Fw, ambient moisture B_wa)";
+  require_kind(fw, FFactorKind::wet, kMethod);
   if (!std::isfinite(ambient_moisture_fraction) || ambient_moisture_fraction < 0.0 || ambient_moisture_fraction >= 1.0) {
     throw units::InputError(fmt::format("ambient-air moisture B_wa = {}: must be >= 0 and below 1", ambient_moisture_fraction));
   }
   if (!context.moisture_fraction || !context.o2_dry_fraction) {
     throw MissingContextError(
         !context.moisture_fraction ? ContextPiece::moisture : ContextPiece::measured_o2,
-        fmt::format("missing context: {} needs the stack moisture and the measured O2 to state C and O2 wet", method));
+        fmt::format("missing context: {} needs the stack moisture and the measured O2 to state C and O2 wet", kMethod));
   }
-  const Conversion wet = concentration.convert(
+  Conversion wet = concentration.convert(
       kg_per_mol_basis(Moisture::wet, DiluentReference::as_measured(), concentration.basis().as_no2), context);
   const double b = o2_basis_percent(context.o2_basis);
   check_o2_level(*context.o2_dry_fraction, context.o2_basis, "measured O2");
@@ -195,22 +203,25 @@ HeatInputRate method19_o2_wet(const Concentration& concentration, const FFactor&
         b, 1.0 - ambient_moisture_fraction, o2_wet_percent));
   }
   const double diluent = b / denominator;
-  HeatInputRate rate{kg_per_mol(wet) * fw.gas_mol_per_J * diluent, method, wet.factors};
-  rate.factors.push_back(f_factor_entry(fw));
-  rate.factors.push_back({"O2 term", diluent, "1",
-                          fmt::format("{:g}/({:g} (1 - {}) - {}), O2 in % wet", b, b, number_text(ambient_moisture_fraction),
-                                      number_text(o2_wet_percent))});
+  HeatInputRate rate{kg_per_mol(wet.result) * fw.gas_mol_per_J * diluent, std::string(kMethod), std::move(wet.factors)};
+  if (context.record_factors) {
+    rate.factors.push_back(f_factor_entry(fw));
+    rate.factors.push_back({"O2 term", diluent, "1",
+                            fmt::format("{:g}/({:g} (1 - {}) - {}), O2 in % wet", b, b,
+                                        number_text(ambient_moisture_fraction), number_text(o2_wet_percent))});
+  }
   return rate;
 }
 
 HeatInputRate method19_co2(const Concentration& concentration, const FFactor& fc, const ConcentrationContext& context) {
-  const std::string method = "US EPA Method 19 Eqs. 19-6/19-7 (CO2-based, Fc)";
-  require_kind(fc, FFactorKind::carbon, method);
+  constexpr std::string_view kMethod = "US EPA Method 19 Eqs. 19-6/19-7 (CO2-based, Fc)";
+  require_kind(fc, FFactorKind::carbon, kMethod);
   // C * 100/%CO2 is the dry concentration at 100 % CO2.
-  const Conversion at_pure_co2 = concentration.convert(
+  Conversion at_pure_co2 = concentration.convert(
       kg_per_mol_basis(Moisture::dry, DiluentReference::co2(1.0), concentration.basis().as_no2), context);
-  HeatInputRate rate{kg_per_mol(at_pure_co2) * fc.gas_mol_per_J, method, at_pure_co2.factors};
-  rate.factors.push_back(f_factor_entry(fc));
+  HeatInputRate rate{kg_per_mol(at_pure_co2.result) * fc.gas_mol_per_J, std::string(kMethod),
+                     std::move(at_pure_co2.factors)};
+  if (context.record_factors) rate.factors.push_back(f_factor_entry(fc));
   return rate;
 }
 
@@ -240,15 +251,16 @@ OutputRate per_useful_output(units::MassFlow rate, units::Power useful_output) {
 }
 
 StackEmission evaluate_stack_emission(const StackEmissionInput& input) {
-  const ConcentrationContext context = ConcentrationContext::from_wet_flue_gas(
+  ConcentrationContext context = ConcentrationContext::from_wet_flue_gas(
       input.h2o_wet_fraction, input.o2_wet_fraction, input.co2_wet_fraction, input.o2_basis);
+  context.record_factors = input.record_factors;
   const Concentration measured =
       Concentration::from_mole_fraction(input.pollutant_wet_fraction, input.pollutant, Moisture::wet);
   const bool as_no2 = measured.basis().as_no2;
   const DiluentReference reference = DiluentReference::o2(input.reference_o2_dry_fraction);
   const Concentration ppmvd =
-      measured.to(make_basis(mole_unit("ppmv"), Moisture::dry, DiluentReference::as_measured(), as_no2), context);
-  const Concentration at_reference = measured.to(make_basis(mole_unit("ppmv"), Moisture::dry, reference, as_no2), context);
+      measured.to(make_basis(ppmv_unit(), Moisture::dry, DiluentReference::as_measured(), as_no2), context);
+  const Concentration at_reference = measured.to(make_basis(ppmv_unit(), Moisture::dry, reference, as_no2), context);
   const units::NormalConditions& normal = input.normal != nullptr ? *input.normal : units::normal_0C();
   Conversion mass_at_reference =
       measured.convert(make_basis(mass_unit("mg/Nm3", normal), Moisture::dry, reference, as_no2), context);

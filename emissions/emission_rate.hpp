@@ -73,6 +73,7 @@ struct HeatInputRate {
   [[nodiscard]] double ng_per_J() const { return g_per_GJ(); }
 };
 
+// The three Method 19 forms list their factors only when context.record_factors is true.
 // Eq. 19-1 form: the concentration is taken dry, as mass, at 0 % O2 (b/(b - %O2_d) applied from the
 // measured O2 or from the basis' O2 level), times Fd.
 HeatInputRate method19_o2_dry(const Concentration& concentration, const FFactor& fd, const ConcentrationContext& context);
@@ -115,6 +116,9 @@ struct StackEmissionInput {
   const units::NormalConditions* normal = &units::normal_0C();  // of the mg/Nm3 figure
   O2Basis o2_basis = O2Basis::us_epa_20_9;
   std::optional<double> operating_hours_per_year;
+  // false skips building the AppliedFactor lists (mg_per_Nm3_at_reference.factors, method19.factors
+  // stay empty), for sweeps; values are identical. Becomes context.record_factors of the result.
+  bool record_factors = true;
 };
 
 struct StackEmission {

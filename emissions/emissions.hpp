@@ -1,6 +1,7 @@
 #pragma once
 // Umbrella header of the emissions layer: concentration bases and conversions, O2/CO2 reference
-// correction, emission rates (Method 19 F-factors), reference-O2 presets, limit screening, cautions.
+// correction, emission rates (Method 19 F-factors), reference-O2 presets, limit screening, cautions,
+// and the report document with its renderers.
 #include "emissions/basis.hpp"
 #include "emissions/cautions.hpp"
 #include "emissions/concentration.hpp"
@@ -9,3 +10,5 @@
 #include "emissions/pollutant.hpp"
 #include "emissions/reference_correction.hpp"
 #include "emissions/reference_o2_presets.hpp"
+#include "emissions/report.hpp"
+#include "emissions/svg_plot.hpp"

@@ -1,0 +1,138 @@
+// `stackbound equilibrium` run as a user runs it: the built binary, its stdout, stderr and exit code.
+// Feeds are invented test mixtures.
+
+#include <string>
+#include <vector>
+
+#include <gtest/gtest.h>
+
+#include <nlohmann/json.hpp>
+
+#include "cases/species_file.hpp"
+#include "core/adiabatic_flame.hpp"
+#include "core/element_amounts.hpp"
+#include "core/equilibrium.hpp"
+#include "tests/support/run_binary.hpp"
+#include "tests/support/tolerance.hpp"
+#include "units/constants.hpp"
+
+namespace stackbound::cases {
+namespace {
+
+using stackbound::testing::is_close;
+using stackbound::testing::ProcessResult;
+using stackbound::testing::run_stackbound;
+
+// Wrong if the command printed values other than the library's, or missed a documented JSON key.
+TEST(EquilibriumCommand, JsonCarriesTheLibraryResult) {
+  const ProcessResult run = run_stackbound({"equilibrium", "--feed", "CH4=1, O2=2.4, N2=9.03", "--temperature",
+                                            "1800K", "--pressure", "2 bar", "--format", "json"});
+  ASSERT_EQ(run.exit_code, 0) << run.err;
+  EXPECT_EQ(run.err, "");
+  const nlohmann::json json = nlohmann::json::parse(run.out);
+  const std::vector<core::SpeciesAmount> feed{{"CH4", 1.0}, {"O2", 2.4}, {"N2", 9.03}};
+  const core::ElementAmounts b = core::element_amounts(builtin_species(), feed);
+  const core::EquilibriumResult expected =
+      core::EquilibriumSolver(builtin_species(), b).solve_tp(b, 1800.0, 2e5);
+  EXPECT_TRUE(is_close(json.at("temperature_K").get<double>(), 1800.0, 1e-15));
+  EXPECT_TRUE(is_close(json.at("pressure_Pa").get<double>(), 2e5, 1e-15));
+  EXPECT_TRUE(is_close(json.at("total_moles").get<double>(), expected.total_gas_moles, 1e-12));
+  EXPECT_EQ(json.at("iterations").get<int>(), expected.iterations);
+  EXPECT_LE(json.at("element_residual").get<double>(), 1e-10);
+  EXPECT_FALSE(json.at("graphite_present").get<bool>());
+  for (const char* name : {"CO2", "H2O", "NO", "OH", "CO", "O2", "N2", "C(gr)"}) {
+    EXPECT_TRUE(is_close(json.at("mole_fractions").at(name).get<double>(), expected.mole_fraction(name), 1e-12, 1e-300))
+        << name;
+    EXPECT_TRUE(is_close(json.at("moles").at(name).get<double>(), expected.moles_of(name), 1e-12, 1e-300)) << name;
+  }
+  EXPECT_EQ(json.at("mole_fractions").size(), expected.species.size());
+}
+
+// Wrong if --adiabatic did not solve HP from the feed temperature, or --species did not restrict.
+TEST(EquilibriumCommand, AdiabaticFromTheFeedTemperatureWithRestrictedProducts) {
+  const ProcessResult run =
+      run_stackbound({"equilibrium", "--feed", "H2=1, O2=0.5, N2=1.88", "--adiabatic", "--feed-temperature", "400K",
+                      "--species", "H2O,H2,O2,OH,H,O,N2", "--format", "json"});
+  ASSERT_EQ(run.exit_code, 0) << run.err;
+  const nlohmann::json json = nlohmann::json::parse(run.out);
+  EXPECT_EQ(json.at("mole_fractions").size(), 7u);
+  EXPECT_FALSE(json.at("mole_fractions").contains("NO"));
+  const std::vector<core::SpeciesAmount> feed{{"H2", 1.0}, {"O2", 0.5}, {"N2", 1.88}};
+  const core::ElementAmounts b = core::element_amounts(builtin_species(), feed);
+  const core::EquilibriumSolver solver(builtin_species(), b, {"H2O", "H2", "O2", "OH", "H", "O", "N2"});
+  const core::EquilibriumResult expected =
+      solver.solve_hp(b, core::feed_enthalpy_J(builtin_species(), feed, 400.0), units::kStandardAtmosphere_Pa);
+  EXPECT_NEAR(json.at("temperature_K").get<double>(), expected.temperature_K, 1e-6);
+  EXPECT_TRUE(is_close(json.at("feed_temperature_K").get<double>(), 400.0, 1e-15));
+  EXPECT_EQ(json.at("mode").get<std::string>(), "adiabatic");
+}
+
+// Wrong if a heat loss did not lower the flame temperature.
+TEST(EquilibriumCommand, HeatLossLowersTheAdiabaticTemperature) {
+  const auto temperature = [](std::vector<std::string> extra) {
+    std::vector<std::string> arguments{"equilibrium", "--feed", "CH4=1, O2=2, N2=7.52", "--adiabatic", "--format", "json"};
+    arguments.insert(arguments.end(), extra.begin(), extra.end());
+    const ProcessResult run = run_stackbound(arguments);
+    EXPECT_EQ(run.exit_code, 0) << run.err;
+    return nlohmann::json::parse(run.out).at("temperature_K").get<double>();
+  };
+  EXPECT_LT(temperature({"--heat-loss", "10%"}), temperature({}) - 50.0);
+}
+
+// Wrong if the text report lost its header lines, its table or the note on what the numbers are.
+TEST(EquilibriumCommand, TextReportHasHeaderTableAndNote) {
+  const ProcessResult run =
+      run_stackbound({"equilibrium", "--feed", "CH4=1, O2=0.6, N2=2.3", "--temperature", "700K"});
+  ASSERT_EQ(run.exit_code, 0) << run.err;
+  for (const char* fragment : {"Temperature 700.00 K", "Pressure 101325 Pa (1 atm)", "Newton iterations",
+                               "element-balance residual", "graphite present", "species", "mole fraction",
+                               "moles [mol]", "C(gr)", "(condensed)",
+                               "an equilibrium bound, not a measurement"}) {
+    EXPECT_NE(run.out.find(fragment), std::string::npos) << fragment << "\n" << run.out;
+  }
+}
+
+// Wrong if --help lacked the examples the design asks every command to show.
+TEST(EquilibriumCommand, HelpShowsExamples) {
+  const ProcessResult run = run_stackbound({"equilibrium", "--help"});
+  EXPECT_EQ(run.exit_code, 0);
+  EXPECT_NE(run.out.find("Examples:"), std::string::npos);
+  EXPECT_NE(run.out.find("stackbound equilibrium --feed \"CH4=1, O2=2.4, N2=9.03\" --temperature 1800K"),
+            std::string::npos);
+}
+
+// Wrong if bad input were answered, or its message did not name the option and the value.
+TEST(EquilibriumCommand, BadInputIsAnErrorNamingTheOption) {
+  struct Case {
+    std::vector<std::string> arguments;
+    const char* fragment;
+  };
+  const Case cases[] = {
+      {{"--feed", "CH4=x", "--temperature", "1800K"}, "--feed CH4 = \"x\""},
+      {{"--feed", "CH5=1", "--temperature", "1800K"}, "--feed = \"CH5\": unknown species"},
+      {{"--feed", "CH4=-1", "--temperature", "1800K"}, "--feed = \"CH4=-1\": the amount must be >= 0 mol"},
+      {{"--feed", "CH4=0", "--temperature", "1800K"}, "--feed: every amount is zero"},
+      {{"--feed", "CH4", "--temperature", "1800K"}, "--feed = \"CH4\": expected NAME=AMOUNT"},
+      {{"--feed", "CH4=1, O2=2", "--temperature", "5000K"}, "--temperature = 5000 K: outside the data range"},
+      {{"--feed", "CH4=1, O2=2", "--temperature", "1800K", "--species", "CO2,O2"},
+       "--species = \"CO2,O2\": no product contains H"},
+      {{"--feed", "CO=1", "--temperature", "1800K", "--species", "CO2,O2"},
+       "cannot hold the feed's elements in its proportions"},
+      {{"--feed", "CH4=1, O2=2"}, "--temperature: missing"},
+      {{"--feed", "CH4=1, O2=2", "--temperature", "1800K", "--adiabatic"}, "not both"},
+      {{"--feed", "CH4=1, O2=2", "--temperature", "1800K", "--feed-temperature", "400K"},
+       "--feed-temperature = \"400K\": applies only with --adiabatic"},
+      {{"--feed", "CH4=1, O2=2", "--adiabatic", "--heat-loss", "120%"}, "--heat-loss = \"120%\""},
+  };
+  for (const Case& c : cases) {
+    std::vector<std::string> arguments{"equilibrium"};
+    arguments.insert(arguments.end(), c.arguments.begin(), c.arguments.end());
+    const ProcessResult run = run_stackbound(arguments);
+    EXPECT_EQ(run.exit_code, 2) << c.fragment;
+    EXPECT_EQ(run.out, "") << c.fragment;
+    EXPECT_NE(run.err.find(c.fragment), std::string::npos) << "expected: " << c.fragment << "\nstderr: " << run.err;
+  }
+}
+
+}  // namespace
+}  // namespace stackbound::cases
