@@ -43,25 +43,6 @@ struct ConvertOptions {
   std::string output;
 };
 
-// "35 ppm, dry" -> 35 and "ppm, dry".
-std::pair<double, std::string> split_value(const std::string& text) {
-  const auto first = text.find_first_not_of(" \t");
-  if (first == std::string::npos) {
-    throw units::InputError("VALUE = \"\": empty; give a number with its unit, e.g. \"35 ppm\"");
-  }
-  const std::size_t start = text[first] == '+' ? first + 1 : first;
-  double number = 0.0;
-  const auto [end, error] = std::from_chars(text.data() + start, text.data() + text.size(), number);
-  if (error == std::errc::result_out_of_range) {
-    throw units::InputError(fmt::format("VALUE = \"{}\": the number is out of range", text));
-  }
-  if (error != std::errc() || end == text.data() + start) {
-    throw units::InputError(fmt::format("VALUE = \"{}\": no number found; give a number with its unit, e.g. \"35 ppm\"", text));
-  }
-  if (!std::isfinite(number)) throw units::InputError(fmt::format("VALUE = \"{}\": not a finite number", text));
-  return {number, std::string(end, text.data() + text.size())};
-}
-
 std::optional<double> optional_fraction(const std::string& text, std::string_view option) {
   if (text.empty()) return std::nullopt;
   return units::parse_fraction(text, option);
@@ -140,7 +121,7 @@ nlohmann::json normal_json(const units::NormalConditions* normal) {
 }
 
 void run(const ConvertOptions& options) {
-  const auto [number, value_basis_text] = split_value(options.value);
+  const auto [number, value_basis_text] = em::split_stated_value(options.value, "VALUE");
   const em::Pollutant pollutant = pollutant_from(options);
   const units::NormalConditions* default_normal =
       options.normal.empty() ? nullptr : &units::normal_conditions_by_key(options.normal, "--normal");

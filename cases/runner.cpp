@@ -69,21 +69,9 @@ core::OperatingPoint build_operating_point(const CaseDefinition& definition) {
 em::Concentration stated_concentration(const SourceText& source, const em::Pollutant& pollutant,
                                        const units::NormalConditions& normal) {
   return located(source.location, [&] {
-    const std::string& text = source.text;
-    const std::size_t comma = text.find(',');
-    const std::string head = text.substr(0, comma);
-    const std::size_t start = head.find_first_not_of(" \t");
-    double value = 0.0;
-    const char* first = head.data() + (start == std::string::npos ? head.size() : start);
-    const auto [end, error] = std::from_chars(first, head.data() + head.size(), value);
-    if (error != std::errc() || !std::isfinite(value)) {
-      throw units::InputError(fmt::format("{} = \"{}\": expected a number, a unit and a basis, e.g. \"35 ppm, dry, O2=3%\"",
-                                          source.path, text));
-    }
-    const std::string basis_text = std::string(end, head.data() + head.size()) +
-                                   (comma == std::string::npos ? "" : "," + text.substr(comma + 1));
-    const em::Basis basis = em::parse_basis(basis_text, source.path, &normal);
-    return em::Concentration(value, pollutant, basis, source.path);
+    const em::StatedValue stated = em::split_stated_value(source.text, source.path);
+    const em::Basis basis = em::parse_basis(stated.rest, source.path, &normal);
+    return em::Concentration(stated.number, pollutant, basis, source.path);
   });
 }
 
@@ -244,11 +232,12 @@ RunResult run_case(const CaseDefinition& definition, const core::SpeciesDatabase
     }
     em::ScreeningResult screening = located(limit.limit.location, [&] {
       const std::string& text = limit.limit.text;
-      const std::string head = text.substr(0, text.find(','));
-      const std::size_t unit_start = head.find_first_of("abcdefghijklmnopqrstuvwxyzABCDEFGHIJKLMNOPQRSTUVWXYZ%µ");
-      const std::string unit = unit_start == std::string::npos ? "" : head.substr(unit_start);
-      const std::string unit_trimmed = unit.substr(0, unit.find_last_not_of(" \t") + 1);
-      if (em::find_concentration_unit(unit_trimmed)) {
+      // A concentration unit ("mg/Nm3", "ppm") makes a concentration limit; anything else is a rate.
+      const std::string rest = em::split_stated_value(text, limit.limit.path).rest;
+      const std::string unit = rest.substr(0, rest.find(','));
+      const auto first = unit.find_first_not_of(" \t");
+      const auto last = unit.find_last_not_of(" \t");
+      if (first != std::string::npos && em::find_concentration_unit(unit.substr(first, last - first + 1))) {
         const em::Concentration stated = stated_concentration(limit.limit, bound->emission.ppmvd.pollutant(), normal);
         return em::screen_concentration(bound->emission.ppmvd, stated, context);
       }

@@ -80,13 +80,13 @@ constexpr double kTraceCeilingLogFraction = -9.210340371976184;  // ln 1e-4
 constexpr double kMatrixFloorLogFraction = -690.0;
 // ln(n_j/n) is kept above this so that it stays a finite number.
 constexpr double kStateFloorLogFraction = -1.0e5;
-// Species whose warm-start amount is exactly zero restart at mole fraction e^-50 (about 2e-22).
-constexpr double kWarmZeroLogFraction = -50.0;
-// A warm start is used when its temperature is within a factor e^0.3 (about 35 %) of the new one.
-constexpr double kWarmStartLogTemperatureRange = 0.3;
-// Within e^0.05 (about 5 %) the warm start's element potentials, carried along their temperature
-// slopes, seed the solve; beyond, its amounts are the better start.
-constexpr double kPotentialStartLogTemperatureRange = 0.05;
+// A basis species of the linear-programming start with zero amount (a degenerate vertex, e.g. O2 of
+// an exactly stoichiometric feed) starts at mole fraction e^-8 (3e-4); chosen on the robustness grid
+// (fewest Newton iterations), not a physical constant.
+constexpr double kDegenerateBasisLogFraction = -8.0;
+// Within e^0.05 (about 5 %) in T the warm start's element potentials, carried along their
+// temperature slopes, seed the solve; beyond, the cold start converges as fast or faster.
+constexpr double kPredictorLogTemperatureRange = 0.05;
 // Condensed phase entry: g_c/RT - sum_k a_kc pi_k below this (dimensionless) admits the species.
 constexpr double kPhaseEntryTolerance = -1e-10;
 constexpr int kMaxPhaseChanges = 20;
@@ -284,7 +284,7 @@ bool linear_programming_start(const std::vector<Term>& gas, const std::vector<Te
     const int j = basis[static_cast<std::size_t>(r)];
     const double amount = t(r, rhs);
     if (j < S) {
-      lnn[static_cast<std::size_t>(j)] = amount > 0.0 ? std::log(amount) : lnN + kWarmZeroLogFraction;
+      lnn[static_cast<std::size_t>(j)] = amount > 0.0 ? std::log(amount) : lnN + kDegenerateBasisLogFraction;
     } else if (amount > 0.0) {
       nc[static_cast<std::size_t>(j - S)] = amount;
       included[static_cast<std::size_t>(j - S)] = 1;
@@ -655,54 +655,42 @@ EquilibriumResult EquilibriumWork::solve(const EquilibriumSolver& solver, const 
   bool polished_start = false;  // the gas amounts already satisfy mu_j/RT = sum_k a_kj pi_k
   std::array<double, kElementCount> pi{};
   // A warm start far from T (a sweep's jump) converges slower than the linear-programming start.
-  const double warm_log_temperature_change =
-      warm != nullptr ? std::abs(std::log(warm->temperature_K / T)) : std::numeric_limits<double>::infinity();
+  // Warm start: near the warm start's temperature, at the same pressure, its element potentials
+  // carried to the new T along their temperature slopes (a first-order predictor) give every gas
+  // amount at once, in equilibrium with each other: ln n_j = ln n - g_j/RT + sum_k a_kj pi_k. Each
+  // element present now must have been present then. Otherwise (a jump in T, or another pressure,
+  // where the predicted mole fractions would not sum to 1) the cold start below is the better one.
   if (warm != nullptr && warm->species_key == solver.species_key_ && warm->moles.size() == solver.names_.size() &&
-      warm_log_temperature_change <= kWarmStartLogTemperatureRange) {
-    double atoms = 0.0;
-    for (std::size_t i = 0; i < solver.candidates_.size(); ++i) atoms += solver.candidates_[i].atom_count * warm->moles[i];
-    double gas_total = 0.0;
-    for (const Term& t : gas) gas_total += warm->moles[t.candidate];
-    // Near the warm start's temperature its element potentials, carried to the new T along their
-    // temperature slopes (a first-order predictor), give every gas amount at once, in equilibrium
-    // with each other at the new T: ln n_j = ln n - g_j/RT + sum_k a_kj pi_k. Each element present
-    // now must have been present then.
+      std::abs(std::log(warm->temperature_K / T)) <= kPredictorLogTemperatureRange &&
+      std::abs(std::log(P / warm->pressure_Pa)) <= 1e-12 && std::isfinite(warm->gas_moles_slope)) {
     const double log_temperature_step = std::log(T / warm->temperature_K);
-    // Only at the same pressure: otherwise the predicted mole fractions would not sum to 1, a start
-    // the iteration recovers from only slowly.
-    bool potentials_usable = warm_log_temperature_change <= kPotentialStartLogTemperatureRange &&
-                             std::abs(std::log(P / warm->pressure_Pa)) <= 1e-12;
-    for (int r = 0; r < E && potentials_usable; ++r) {
+    bool usable = true;
+    for (int r = 0; r < E && usable; ++r) {
       const std::size_t k = element_of_row[static_cast<std::size_t>(r)];
       bool carried = false;
       for (std::size_t i = 0; i < solver.candidates_.size() && !carried; ++i) {
         carried = solver.candidates_[i].atoms[k] > 0.0 && warm->moles[i] > 0.0;
       }
-      potentials_usable = carried && std::isfinite(warm->element_potentials[k]) &&
-                          std::isfinite(warm->element_potential_slopes[k]);
+      usable = carried && std::isfinite(warm->element_potentials[k]) && std::isfinite(warm->element_potential_slopes[k]);
     }
-    if (potentials_usable) {
+    double atoms = 0.0;
+    for (std::size_t i = 0; i < solver.candidates_.size(); ++i) atoms += solver.candidates_[i].atom_count * warm->moles[i];
+    double gas_total = 0.0;
+    for (const Term& t : gas) gas_total += warm->moles[t.candidate];
+    if (usable && atoms > 0.0 && std::isfinite(atoms) && gas_total > 0.0) {
       for (int r = 0; r < E; ++r) {
         const std::size_t k = element_of_row[static_cast<std::size_t>(r)];
         pi[static_cast<std::size_t>(r)] =
             warm->element_potentials[k] + warm->element_potential_slopes[k] * log_temperature_step;
       }
-    }
-    if (atoms > 0.0 && std::isfinite(atoms) && gas_total > 0.0) {
-      lnN = std::log(gas_total / atoms);
-      if (potentials_usable && std::isfinite(warm->gas_moles_slope)) lnN += warm->gas_moles_slope * log_temperature_step;
+      lnN = std::log(gas_total / atoms) + warm->gas_moles_slope * log_temperature_step;
       for (std::size_t j = 0; j < S; ++j) {
         const Term& t = gas[j];
-        if (potentials_usable) {
-          double ln_fraction = -t.g;
-          for (int p = 0; p < t.count; ++p) {
-            ln_fraction += t.atoms[static_cast<std::size_t>(p)] * pi[static_cast<std::size_t>(t.row[static_cast<std::size_t>(p)])];
-          }
-          lnn[j] = std::max(ln_fraction, kStateFloorLogFraction) + lnN;
-        } else {
-          const double x = warm->moles[t.candidate] / atoms;
-          lnn[j] = x > 0.0 ? std::max(std::log(x), lnN + kStateFloorLogFraction) : lnN + kWarmZeroLogFraction;
+        double ln_fraction = -t.g;
+        for (int p = 0; p < t.count; ++p) {
+          ln_fraction += t.atoms[static_cast<std::size_t>(p)] * pi[static_cast<std::size_t>(t.row[static_cast<std::size_t>(p)])];
         }
+        lnn[j] = std::max(ln_fraction, kStateFloorLogFraction) + lnN;
       }
       std::size_t count = 0;
       for (std::size_t c = 0; c < C; ++c) {
@@ -714,7 +702,7 @@ EquilibriumResult EquilibriumWork::solve(const EquilibriumSolver& solver, const 
         }
       }
       warm_used = true;
-      polished_start = potentials_usable;
+      polished_start = true;
     }
   }
   std::array<int, kElementCount> lp_basis{};

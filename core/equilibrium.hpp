@@ -102,7 +102,9 @@ class EquilibriumSolver {
   // units::InputError for bad T, P or b (temperature outside a candidate's data range, non-positive
   // pressure, empty or negative b, an element unknown to this solver, element proportions the
   // candidates cannot hold), ConvergenceError if Newton fails. `warm_start`: a result of this solver
-  // (any T, P, b) whose composition seeds the iteration.
+  // (any b) at the same pressure and within 5 % in T seeds the iteration (its element potentials,
+  // moved along their temperature slopes); any other warm start is ignored and the solve starts
+  // cold (linear-programming estimate). The answer does not depend on the start.
   [[nodiscard]] EquilibriumResult solve_tp(const ElementAmounts& b, double temperature_K, double pressure_Pa,
                                            const EquilibriumResult* warm_start = nullptr) const;
 

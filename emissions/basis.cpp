@@ -507,4 +507,23 @@ Basis parse_basis(std::string_view text, std::string_view field, const units::No
   return complete_written(parse_partial_basis(text, field), field, default_normal, std::string(text));
 }
 
+StatedValue split_stated_value(std::string_view text, std::string_view field) {
+  const auto first = text.find_first_not_of(" \t");
+  if (first == std::string_view::npos) {
+    throw units::InputError(fmt::format("{} = \"\": empty; give a number with its unit, e.g. \"35 ppm\"", field));
+  }
+  const std::size_t start = text[first] == '+' ? first + 1 : first;
+  double number = 0.0;
+  const auto [end, error] = std::from_chars(text.data() + start, text.data() + text.size(), number);
+  if (error == std::errc::result_out_of_range) {
+    throw units::InputError(fmt::format("{} = \"{}\": the number is out of range", field, text));
+  }
+  if (error != std::errc() || end == text.data() + start) {
+    throw units::InputError(
+        fmt::format("{} = \"{}\": no number found; give a number with its unit, e.g. \"35 ppm\"", field, text));
+  }
+  if (!std::isfinite(number)) throw units::InputError(fmt::format("{} = \"{}\": not a finite number", field, text));
+  return {number, std::string(end, text.data() + text.size())};
+}
+
 }  // namespace stackbound::emissions

@@ -152,6 +152,15 @@ Basis complete_basis(const PartialBasis& partial, std::string_view field,
 Basis complete_basis_from(const PartialBasis& partial, const Basis& inherit, std::string_view field,
                           const units::NormalConditions* default_normal = nullptr);
 
+// "35 ppm, dry, O2=3%" -> 35 and "ppm, dry, O2=3%": the leading number of a stated concentration and
+// the rest (unit and basis items, for parse_partial_basis). Throws units::InputError naming `field`
+// for empty text, no number, a number out of range or not finite.
+struct StatedValue {
+  double number = 0.0;
+  std::string rest;
+};
+StatedValue split_stated_value(std::string_view text, std::string_view field);
+
 // parse_partial_basis + complete_basis.
 Basis parse_basis(std::string_view text, std::string_view field, const units::NormalConditions* default_normal = nullptr);
 

@@ -115,7 +115,7 @@ TEST(CaseFile, BrokenCasesFailWithLocatedMessagesAndNoOutputFile) {
        ":14:14: "},
       {"malformed measured value",
        replaced(v, "report:", "stack:\n  measured:\n    co: about twenty\nreport:"),
-       ":12:9: stack.measured.co = \"about twenty\": expected a number, a unit and a basis"},
+       ":12:9: stack.measured.co = \"about twenty\": no number found; give a number with its unit"},
       {"preset reference O2 without a plant type", replaced(v, "reference_o2: 3 %", "reference_o2: preset"),
        ":11:17: report.reference_o2 = \"preset\": needs case.plant_type"},
       {"unknown plant type", replaced(v, "  title: Test boiler (invented)\n", "  title: Test boiler (invented)\n  plant_type: boiler\n"),

@@ -20,6 +20,7 @@
 #include "cases/species_file.hpp"
 #include "core/combustion.hpp"
 #include "core/fuel_presets.hpp"
+#include "tests/support/run_binary.hpp"
 #include "tests/support/tolerance.hpp"
 #include "units/input_error.hpp"
 
@@ -30,46 +31,8 @@ using stackbound::testing::is_close;
 
 const core::SpeciesDatabase& db() { return builtin_species(); }
 
-struct ProcessResult {
-  int exit_code = -1;
-  std::string out;
-  std::string err;
-};
-
-std::string shell_quote(const std::string& argument) {
-  std::string quoted = "'";
-  for (const char c : argument) quoted += c == '\'' ? std::string("'\\''") : std::string(1, c);
-  return quoted + "'";
-}
-
-ProcessResult run_stackbound(const std::vector<std::string>& arguments) {
-  std::string err_template = (std::filesystem::temp_directory_path() / "stackbound_fuel_test_XXXXXX").string();
-  const int err_descriptor = ::mkstemp(err_template.data());
-  if (err_descriptor < 0) {
-    ADD_FAILURE() << "mkstemp failed for " << err_template;
-    return {};
-  }
-  ::close(err_descriptor);
-  const std::filesystem::path err_file = err_template;
-  std::string command = shell_quote(STACKBOUND_BINARY);
-  for (const std::string& argument : arguments) command += " " + shell_quote(argument);
-  command += " 2>" + shell_quote(err_file.string()) + " </dev/null";
-  ProcessResult run;
-  FILE* pipe = ::popen(command.c_str(), "r");
-  if (pipe == nullptr) {
-    ADD_FAILURE() << "popen failed: " << command;
-    return run;
-  }
-  std::array<char, 4096> buffer{};
-  std::size_t count = 0;
-  while ((count = std::fread(buffer.data(), 1, buffer.size(), pipe)) > 0) run.out.append(buffer.data(), count);
-  const int status = ::pclose(pipe);
-  run.exit_code = WIFEXITED(status) ? WEXITSTATUS(status) : -1;
-  std::ifstream err(err_file);
-  run.err.assign(std::istreambuf_iterator<char>(err), std::istreambuf_iterator<char>());
-  std::filesystem::remove(err_file);
-  return run;
-}
+using stackbound::testing::ProcessResult;
+using stackbound::testing::run_stackbound;
 
 // ---------------------------------------------------------------------------------------------------
 // Fuel files

@@ -32,7 +32,13 @@ inline void record_published_check(const PublishedCheck& check) {
                                 {"published", check.published}, {"source", check.source},
                                 {"tolerance", check.tolerance},  {"tool", fmt::format("{:.6g}", check.tool_value)}};
   // The key is unique per check within a test: a repeated key would overwrite an earlier check.
-  ::testing::Test::RecordProperty("check: " + check.quantity + " | " + check.conditions, value.dump());
+  // GoogleTest writes keys unescaped, so quotes and backslashes are replaced; values are ASCII-escaped
+  // JSON because GoogleTest escapes every byte above 127 on its own.
+  std::string key = "check: " + check.quantity + " | " + check.conditions;
+  for (char& c : key) {
+    if (c == '"' || c == '\\') c = '\'';
+  }
+  ::testing::Test::RecordProperty(key, value.dump(-1, ' ', true));
 }
 
 }  // namespace stackbound::testing
