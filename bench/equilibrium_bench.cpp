@@ -20,15 +20,13 @@ constexpr double kAtm_Pa = 101325.0;
 void keep(const double& value) { benchmark::DoNotOptimize(value); }
 
 // Stoichiometric methane with dry air (O2 + 3.76 N2 + Ar trace): invented demonstration feed.
-std::vector<core::SpeciesAmount> methane_air() {
-  return {{"CH4", 1.0}, {"O2", 2.0}, {"N2", 7.44}, {"Ar", 0.089}};
-}
+std::vector<core::SpeciesAmount> methane_air() { return {{"CH4", 1.0}, {"O2", 2.0}, {"N2", 7.44}, {"Ar", 0.089}}; }
 
-// Coal-like feed with C/H/O/N/S in air at 20 % excess air: invented demonstration feed
-// (per 100 g of a bituminous-like solid: C 6.0, H 4.6, O 0.45, N 0.1, S 0.05 mol atoms).
+// Coal-like C/H/O/N/S feed with air, about 35 % excess air: an invented demonstration feed
+// (6 mol C as graphite and methane, 3 mol H, 0.1 mol N from ammonia, 0.05 mol S from H2S, moisture).
 std::vector<core::SpeciesAmount> coal_like() {
-  return {{"C(gr)", 5.5}, {"CH4", 0.5}, {"H2O", 0.3}, {"NH3", 0.1}, {"H2S", 0.05},
-          {"O2", 9.0}, {"N2", 33.84}, {"Ar", 0.40}};
+  return {{"C(gr)", 5.5}, {"CH4", 0.5}, {"H2O", 0.3},  {"NH3", 0.1},
+          {"H2S", 0.05},  {"O2", 9.0},  {"N2", 33.84}, {"Ar", 0.40}};
 }
 
 struct Problem {
@@ -53,8 +51,7 @@ void tp_cold(benchmark::State& state, const std::vector<core::SpeciesAmount>& fe
     keep(result.total_gas_moles);
     temperature_K = temperature_K >= 2400.0 ? 1200.0 : temperature_K + 7.0;
   }
-  state.counters["newton_iterations"] =
-      benchmark::Counter(iterations, benchmark::Counter::kAvgIterations);
+  state.counters["newton_iterations"] = benchmark::Counter(iterations, benchmark::Counter::kAvgIterations);
 }
 
 // Warm start: each solve is seeded with the previous result, 7 K away (a sweep).
@@ -70,8 +67,7 @@ void tp_warm(benchmark::State& state, const std::vector<core::SpeciesAmount>& fe
     keep(result.total_gas_moles);
     previous = std::move(result);
   }
-  state.counters["newton_iterations"] =
-      benchmark::Counter(iterations, benchmark::Counter::kAvgIterations);
+  state.counters["newton_iterations"] = benchmark::Counter(iterations, benchmark::Counter::kAvgIterations);
 }
 
 void BM_TpMethaneAirCold(benchmark::State& state) { tp_cold(state, methane_air()); }
@@ -92,8 +88,7 @@ void BM_HpMethaneAirCold(benchmark::State& state) {
     iterations += result.iterations;
     keep(result.temperature_K);
   }
-  state.counters["newton_iterations"] =
-      benchmark::Counter(iterations, benchmark::Counter::kAvgIterations);
+  state.counters["newton_iterations"] = benchmark::Counter(iterations, benchmark::Counter::kAvgIterations);
 }
 BENCHMARK(BM_HpMethaneAirCold);
 
@@ -111,8 +106,7 @@ void BM_HpMethaneAirWarm(benchmark::State& state) {
     keep(result.temperature_K);
     previous = std::move(result);
   }
-  state.counters["newton_iterations"] =
-      benchmark::Counter(iterations, benchmark::Counter::kAvgIterations);
+  state.counters["newton_iterations"] = benchmark::Counter(iterations, benchmark::Counter::kAvgIterations);
 }
 BENCHMARK(BM_HpMethaneAirWarm);
 

@@ -2,13 +2,12 @@
 // chemical equilibrium of a feed of database species at fixed T and P, or at the adiabatic flame
 // temperature (core/equilibrium.hpp, core/adiabatic_flame.hpp).
 
-#include <algorithm>
-#include <memory>
-#include <numeric>
-
 #include <fmt/format.h>
 
+#include <algorithm>
+#include <memory>
 #include <nlohmann/json.hpp>
+#include <numeric>
 
 #include "cases/commands.hpp"
 #include "cases/species_file.hpp"
@@ -98,8 +97,8 @@ std::string text_report(const core::SpeciesDatabase& database, const core::Equil
                       result.pressure_Pa / units::kStandardAtmosphere_Pa);
   text += fmt::format("Newton iterations {}, element-balance residual {:.1e}, graphite {}\n", result.iterations,
                       result.element_residual, result.graphite_present ? "present" : "absent");
-  text += fmt::format("Gas moles {:.6g} mol, products' enthalpy {:.6g} J\n\n", result.total_gas_moles,
-                      result.enthalpy_J);
+  text +=
+      fmt::format("Gas moles {:.6g} mol, products' enthalpy {:.6g} J\n\n", result.total_gas_moles, result.enthalpy_J);
 
   std::vector<std::size_t> order(result.species.size());
   std::iota(order.begin(), order.end(), std::size_t{0});
@@ -128,9 +127,10 @@ std::string text_report(const core::SpeciesDatabase& database, const core::Equil
     }
   }
   if (omitted > 0) {
-    text += fmt::format("({} products below mole fraction {:.0e} (or absent condensed) not listed; --all lists "
-                        "them)\n",
-                        omitted, kDefaultListedFraction);
+    text += fmt::format(
+        "({} products below mole fraction {:.0e} (or absent condensed) not listed; --all lists "
+        "them)\n",
+        omitted, kDefaultListedFraction);
   }
   text += fmt::format("\nMole fractions are of the gas phase. {}\n", kBoundNote);
   return text;
@@ -173,9 +173,8 @@ void run(const EquilibriumOptions& options, const GlobalOptions& global) {
   const core::SpeciesDatabase database = species_database(global.species_file);
   const std::vector<core::SpeciesAmount> feed = parse_feed(options.feed);
   const core::ElementAmounts b = core::element_amounts(database, feed, "--feed");
-  const double pressure_Pa = options.pressure.empty()
-                                 ? units::kStandardAtmosphere_Pa
-                                 : units::parse_pressure(options.pressure, "--pressure").value();
+  const double pressure_Pa = options.pressure.empty() ? units::kStandardAtmosphere_Pa
+                                                      : units::parse_pressure(options.pressure, "--pressure").value();
   if (options.adiabatic && !options.temperature.empty()) {
     throw units::InputError(fmt::format(
         "--temperature = \"{}\": give either --temperature (fixed T) or --adiabatic, not both", options.temperature));
@@ -184,8 +183,8 @@ void run(const EquilibriumOptions& options, const GlobalOptions& global) {
     throw units::InputError("--temperature: missing; give --temperature (e.g. 1800K) or --adiabatic");
   }
   if (!options.adiabatic && !options.feed_temperature.empty()) {
-    throw units::InputError(fmt::format("--feed-temperature = \"{}\": applies only with --adiabatic",
-                                        options.feed_temperature));
+    throw units::InputError(
+        fmt::format("--feed-temperature = \"{}\": applies only with --adiabatic", options.feed_temperature));
   }
   if (!options.adiabatic && !options.heat_loss.empty()) {
     throw units::InputError(fmt::format("--heat-loss = \"{}\": applies only with --adiabatic", options.heat_loss));
@@ -206,8 +205,8 @@ void run(const EquilibriumOptions& options, const GlobalOptions& global) {
       }
       const double loss = options.heat_loss.empty() ? 0.0 : units::parse_fraction(options.heat_loss, "--heat-loss");
       if (loss < 0.0 || loss >= 1.0) {
-        throw units::InputError(fmt::format("--heat-loss = \"{}\": must be at least 0 % and below 100 %",
-                                            options.heat_loss));
+        throw units::InputError(
+            fmt::format("--heat-loss = \"{}\": must be at least 0 % and below 100 %", options.heat_loss));
       }
       const double enthalpy_J = core::feed_enthalpy_J(database, feed, feed_temperature_K, "--feed-temperature");
       const double heating_value_J =
@@ -241,9 +240,11 @@ void add_equilibrium_command(CLI::App& app, const GlobalOptions& global) {
       "Amounts are moles of database species (see `stackbound species`); formulas are case-sensitive\n"
       "(CO2, NO, Ar, C(gr)). Products: every species made of the feed's elements unless --species\n"
       "restricts them. Results are equilibrium bounds at the stated conditions, not measurements.");
-  command->add_option("--feed", options->feed, "Reactants as NAME=MOLES, comma-separated, e.g. \"CH4=1, O2=2, N2=7.52\"")
+  command
+      ->add_option("--feed", options->feed, "Reactants as NAME=MOLES, comma-separated, e.g. \"CH4=1, O2=2, N2=7.52\"")
       ->required();
-  command->add_option("--temperature", options->temperature, "Fixed equilibrium temperature with unit, e.g. 1800K, \"1500 degC\"");
+  command->add_option("--temperature", options->temperature,
+                      "Fixed equilibrium temperature with unit, e.g. 1800K, \"1500 degC\"");
   command->add_flag("--adiabatic", options->adiabatic,
                     "Solve for the adiabatic flame temperature (products' enthalpy = feed's enthalpy)");
   command->add_option("--feed-temperature", options->feed_temperature,

@@ -1,9 +1,9 @@
 #include "core/adiabatic_flame.hpp"
 
+#include <fmt/format.h>
+
 #include <algorithm>
 #include <cmath>
-
-#include <fmt/format.h>
 
 #include "core/elements.hpp"
 #include "core/fuel.hpp"
@@ -140,12 +140,10 @@ double feed_heating_value_J(const SpeciesDatabase& db, std::span<const SpeciesAm
 double hp_target_enthalpy_J(double feed_enthalpy_J, double heat_loss_fraction, double heating_value_J) {
   if (!std::isfinite(heat_loss_fraction) || heat_loss_fraction < 0.0 || heat_loss_fraction >= 1.0) {
     throw units::InputError(fmt::format(
-        "heat loss = {:g}: must be a fraction of the heating value in [0, 1) (e.g. 0.05 for 5 %)",
-        heat_loss_fraction));
+        "heat loss = {:g}: must be a fraction of the heating value in [0, 1) (e.g. 0.05 for 5 %)", heat_loss_fraction));
   }
   if (!std::isfinite(heating_value_J) || heating_value_J < 0.0) {
-    throw units::InputError(
-        fmt::format("heating value = {:g} J: must be a finite number >= 0 J", heating_value_J));
+    throw units::InputError(fmt::format("heating value = {:g} J: must be a finite number >= 0 J", heating_value_J));
   }
   if (!std::isfinite(feed_enthalpy_J)) {
     throw units::InputError(fmt::format("feed enthalpy = {:g} J: must be a finite number", feed_enthalpy_J));

@@ -31,8 +31,7 @@ namespace stackbound::core {
 
 // H_target = feed_enthalpy - heat_loss_fraction * heating_value. Throws units::InputError if the
 // fraction is outside [0, 1) or the heating value is negative or not finite.
-[[nodiscard]] double hp_target_enthalpy_J(double feed_enthalpy_J, double heat_loss_fraction,
-                                          double heating_value_J);
+[[nodiscard]] double hp_target_enthalpy_J(double feed_enthalpy_J, double heat_loss_fraction, double heating_value_J);
 
 // One reactant stream at its own temperature.
 struct FeedStream {

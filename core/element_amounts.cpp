@@ -1,8 +1,8 @@
 #include "core/element_amounts.hpp"
 
-#include <cmath>
-
 #include <fmt/format.h>
+
+#include <cmath>
 
 #include "core/elements.hpp"
 #include "units/constants.hpp"
@@ -44,9 +44,10 @@ std::vector<const Species*> checked_feed(const SpeciesDatabase& db, std::span<co
     throw std::logic_error("element_amounts: kElementCount does not match known_elements()");
   }
   if (feed.empty()) {
-    throw units::InputError(fmt::format("{}: the feed is empty; give at least one species with a positive amount "
-                                        "(e.g. \"CH4=1, O2=2, N2=7.52\")",
-                                        field));
+    throw units::InputError(
+        fmt::format("{}: the feed is empty; give at least one species with a positive amount "
+                    "(e.g. \"CH4=1, O2=2, N2=7.52\")",
+                    field));
   }
   std::vector<const Species*> species;
   species.reserve(feed.size());
@@ -68,8 +69,7 @@ std::vector<const Species*> checked_feed(const SpeciesDatabase& db, std::span<co
 }
 }  // namespace
 
-ElementAmounts element_amounts(const SpeciesDatabase& db, std::span<const SpeciesAmount> feed,
-                               std::string_view field) {
+ElementAmounts element_amounts(const SpeciesDatabase& db, std::span<const SpeciesAmount> feed, std::string_view field) {
   const std::vector<const Species*> species = checked_feed(db, feed, field);
   ElementAmounts amounts;
   for (std::size_t i = 0; i < feed.size(); ++i) amounts.add_species(*species[i], feed[i].moles);
@@ -80,16 +80,16 @@ double feed_enthalpy_J(const SpeciesDatabase& db, std::span<const SpeciesAmount>
                        std::string_view field) {
   const std::vector<const Species*> species = checked_feed(db, feed, field);
   if (!std::isfinite(temperature_K) || temperature_K <= 0.0) {
-    throw units::InputError(fmt::format("{} temperature = {:g} K: must be a finite absolute temperature > 0 K",
-                                        field, temperature_K));
+    throw units::InputError(
+        fmt::format("{} temperature = {:g} K: must be a finite absolute temperature > 0 K", field, temperature_K));
   }
   double enthalpy_J = 0.0;
   for (std::size_t i = 0; i < feed.size(); ++i) {
     if (feed[i].moles == 0.0) continue;
     if (!species[i]->covers(temperature_K)) {
-      throw units::InputError(fmt::format("{} temperature = {:g} K: outside the data range {:g}-{:g} K of {}",
-                                          field, temperature_K, species[i]->range().low_K,
-                                          species[i]->range().high_K, species[i]->formula()));
+      throw units::InputError(fmt::format("{} temperature = {:g} K: outside the data range {:g}-{:g} K of {}", field,
+                                          temperature_K, species[i]->range().low_K, species[i]->range().high_K,
+                                          species[i]->formula()));
     }
     enthalpy_J += feed[i].moles * units::kGasConstant_J_per_mol_K * temperature_K *
                   species[i]->h_over_RT_unchecked(temperature_K);

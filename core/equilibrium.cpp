@@ -1,11 +1,11 @@
 #include "core/equilibrium.hpp"
 
+#include <fmt/format.h>
+
+#include <Eigen/Dense>
 #include <algorithm>
 #include <cmath>
 #include <limits>
-
-#include <Eigen/Dense>
-#include <fmt/format.h>
 
 #include "core/elements.hpp"
 #include "units/constants.hpp"
@@ -73,7 +73,7 @@ class NewtonFactorisation {
 
 // Step control of NASA RP-1311 (eqs. 3.1-3.3): a species above mole fraction 1e-8 may grow by at most
 // e^2 per step (and n by e^0.4); a trace species may rise to at most mole fraction 1e-4 in one step.
-constexpr double kTraceLogFraction = -18.420680743952367;    // ln 1e-8
+constexpr double kTraceLogFraction = -18.420680743952367;        // ln 1e-8
 constexpr double kTraceCeilingLogFraction = -9.210340371976184;  // ln 1e-4
 // Amounts below e^-690 of n (about 1e-300) enter the Newton matrix at that floor, so that no balance
 // row becomes exactly zero; the reported amounts keep their own (smaller) values.
@@ -369,9 +369,14 @@ EquilibriumSolver::EquilibriumSolver(const SpeciesDatabase& db, const ElementAmo
     }
   }
 
+  // The solver keeps its own copies of the species records, so it may outlive the database.
+  auto owned = std::make_shared<std::vector<Species>>();
+  owned->reserve(chosen.size());
   for (int pass = 0; pass < 2; ++pass) {
-    for (const Species* species : chosen) {
-      if (species->is_gas() != (pass == 0)) continue;
+    for (const Species* chosen_species : chosen) {
+      if (chosen_species->is_gas() != (pass == 0)) continue;
+      owned->push_back(*chosen_species);
+      const Species* species = &owned->back();
       Candidate candidate;
       candidate.species = species;
       candidate.gas = species->is_gas();
@@ -390,6 +395,7 @@ EquilibriumSolver::EquilibriumSolver(const SpeciesDatabase& db, const ElementAmo
       names_.push_back(species->formula());
     }
   }
+  species_ = std::move(owned);
   // FNV-1a hash of the product list: a warm start must come from a solver with the same products.
   species_key_ = 1469598103934665603ULL;
   for (const std::string& name : names_) {
@@ -408,8 +414,8 @@ EquilibriumSolver::EquilibriumSolver(const SpeciesDatabase& db, const ElementAmo
   }
   for (std::size_t k = 0; k < kElementCount; ++k) {
     if (!element_allowed_[k]) continue;
-    const bool held = std::any_of(candidates_.begin(), candidates_.end(),
-                                  [k](const Candidate& c) { return c.atoms[k] > 0.0; });
+    const bool held =
+        std::any_of(candidates_.begin(), candidates_.end(), [k](const Candidate& c) { return c.atoms[k] > 0.0; });
     if (!held) {
       throw units::InputError(fmt::format(
           "species = \"{}\": no product contains {}, which is in the feed; the product list cannot hold the "
@@ -430,9 +436,10 @@ EquilibriumSolver::EquilibriumSolver(const SpeciesDatabase& db, const ElementAmo
   covered_low_K_ = min_temperature_K_;
   if (all_cover_reference) min_temperature_K_ = std::min(min_temperature_K_, units::kReferenceTemperature_K);
   if (!(min_temperature_K_ < max_temperature_K_)) {
-    throw units::InputError(fmt::format("species: the data ranges of the product candidates do not overlap "
-                                        "(common range {:g}-{:g} K)",
-                                        min_temperature_K_, max_temperature_K_));
+    throw units::InputError(
+        fmt::format("species: the data ranges of the product candidates do not overlap "
+                    "(common range {:g}-{:g} K)",
+                    min_temperature_K_, max_temperature_K_));
   }
   independent_all_ = independent_rows(element_allowed_);
   auto tables = std::make_shared<EquilibriumTables>();
@@ -511,8 +518,8 @@ void EquilibriumSolver::check_temperature(double temperature_K) const {
       throw units::InputError(fmt::format(
           "temperature = {:g} K: outside the data range of product {} ({:g}-{:g} K); the product candidates "
           "together cover {:g}-{:g} K",
-          temperature_K, c.species->formula(), c.species->range().low_K, c.species->range().high_K,
-          min_temperature_K_, max_temperature_K_));
+          temperature_K, c.species->formula(), c.species->range().low_K, c.species->range().high_K, min_temperature_K_,
+          max_temperature_K_));
     }
   }
 }
@@ -583,9 +590,9 @@ EquilibriumResult EquilibriumWork::solve(const EquilibriumSolver& solver, const 
                                           known_elements()[k].symbol, amount));
     }
     if (amount > 0.0 && !solver.element_allowed_[k]) {
-      throw units::InputError(fmt::format(
-          "element amounts: {} = {:g} mol, but this solver was built for the elements {} only",
-          known_elements()[k].symbol, amount, element_list(solver.element_allowed_)));
+      throw units::InputError(
+          fmt::format("element amounts: {} = {:g} mol, but this solver was built for the elements {} only",
+                      known_elements()[k].symbol, amount, element_list(solver.element_allowed_)));
     }
     active[k] = amount > 0.0;
     scale += amount;
@@ -629,21 +636,20 @@ EquilibriumResult EquilibriumWork::solve(const EquilibriumSolver& solver, const 
       const Candidate& c = solver.candidates_[term.candidate];
       nasa7_properties(T < c.mid_K ? c.below_mid : c.above_mid, T, lnT, term.g, term.h, term.cp);
       if (c.gas) term.g += lnP;
-      term.negligible_ln_moles = term.count > 0 ? std::numeric_limits<double>::infinity()
-                                                : -std::numeric_limits<double>::infinity();
+      term.negligible_ln_moles =
+          term.count > 0 ? std::numeric_limits<double>::infinity() : -std::numeric_limits<double>::infinity();
       for (int p = 0; p < term.count; ++p) {
         const std::size_t up = static_cast<std::size_t>(p);
-        term.negligible_ln_moles = std::min(
-            term.negligible_ln_moles,
-            ln_bs[static_cast<std::size_t>(term.row[up])] - term.log_atoms[up] + kNegligibleLogShare);
+        term.negligible_ln_moles = std::min(term.negligible_ln_moles, ln_bs[static_cast<std::size_t>(term.row[up])] -
+                                                                          term.log_atoms[up] + kNegligibleLogShare);
       }
     }
   }
   const std::size_t S = gas.size();
   const std::size_t C = condensed.size();
   if (S == 0) {
-    throw units::InputError(fmt::format("element amounts: with the elements {} present, no gas product remains",
-                                        element_list(active)));
+    throw units::InputError(
+        fmt::format("element amounts: with the elements {} present, no gas product remains", element_list(active)));
   }
 
   // Initial state: ln n_j, ln n, condensed amounts (all per mole of feed atoms).
@@ -671,10 +677,12 @@ EquilibriumResult EquilibriumWork::solve(const EquilibriumSolver& solver, const 
       for (std::size_t i = 0; i < solver.candidates_.size() && !carried; ++i) {
         carried = solver.candidates_[i].atoms[k] > 0.0 && warm->moles[i] > 0.0;
       }
-      usable = carried && std::isfinite(warm->element_potentials[k]) && std::isfinite(warm->element_potential_slopes[k]);
+      usable =
+          carried && std::isfinite(warm->element_potentials[k]) && std::isfinite(warm->element_potential_slopes[k]);
     }
     double atoms = 0.0;
-    for (std::size_t i = 0; i < solver.candidates_.size(); ++i) atoms += solver.candidates_[i].atom_count * warm->moles[i];
+    for (std::size_t i = 0; i < solver.candidates_.size(); ++i)
+      atoms += solver.candidates_[i].atom_count * warm->moles[i];
     double gas_total = 0.0;
     for (const Term& t : gas) gas_total += warm->moles[t.candidate];
     if (usable && atoms > 0.0 && std::isfinite(atoms) && gas_total > 0.0) {
@@ -688,7 +696,8 @@ EquilibriumResult EquilibriumWork::solve(const EquilibriumSolver& solver, const 
         const Term& t = gas[j];
         double ln_fraction = -t.g;
         for (int p = 0; p < t.count; ++p) {
-          ln_fraction += t.atoms[static_cast<std::size_t>(p)] * pi[static_cast<std::size_t>(t.row[static_cast<std::size_t>(p)])];
+          ln_fraction +=
+              t.atoms[static_cast<std::size_t>(p)] * pi[static_cast<std::size_t>(t.row[static_cast<std::size_t>(p)])];
         }
         lnn[j] = std::max(ln_fraction, kStateFloorLogFraction) + lnN;
       }
@@ -720,7 +729,8 @@ EquilibriumResult EquilibriumWork::solve(const EquilibriumSolver& solver, const 
         const int j = lp_basis[static_cast<std::size_t>(r)];
         const bool is_gas = j < static_cast<int>(S);
         const Term& t = is_gas ? gas[static_cast<std::size_t>(j)] : condensed[static_cast<std::size_t>(j) - S];
-        for (int p = 0; p < t.count; ++p) basis_matrix(r, t.row[static_cast<std::size_t>(p)]) = t.atoms[static_cast<std::size_t>(p)];
+        for (int p = 0; p < t.count; ++p)
+          basis_matrix(r, t.row[static_cast<std::size_t>(p)]) = t.atoms[static_cast<std::size_t>(p)];
         potentials_rhs[r] = t.g + (is_gas ? lnn[static_cast<std::size_t>(j)] - lnN : 0.0);
       }
       const Vector potentials = basis_matrix.partialPivLu().solve(potentials_rhs);
@@ -817,7 +827,8 @@ EquilibriumResult EquilibriumWork::solve(const EquilibriumSolver& solver, const 
     }
     const double N = std::exp(lnN);
     std::array<double, kElementCount> residual{};
-    for (int r = 0; r < E; ++r) residual[static_cast<std::size_t>(r)] = bs[static_cast<std::size_t>(r)] - bgas[static_cast<std::size_t>(r)];
+    for (int r = 0; r < E; ++r)
+      residual[static_cast<std::size_t>(r)] = bs[static_cast<std::size_t>(r)] - bgas[static_cast<std::size_t>(r)];
     for (std::size_t c = 0; c < C; ++c) {
       if (included[c] == 0) continue;
       const Term& t = condensed[c];
@@ -833,7 +844,8 @@ EquilibriumResult EquilibriumWork::solve(const EquilibriumSolver& solver, const 
     }
     element_residual = 0.0;
     for (int r = 0; r < E; ++r) {
-      element_residual = std::max(element_residual, std::abs(residual[static_cast<std::size_t>(r)]) / bs[static_cast<std::size_t>(r)]);
+      element_residual =
+          std::max(element_residual, std::abs(residual[static_cast<std::size_t>(r)]) / bs[static_cast<std::size_t>(r)]);
       rhs[r] += residual[static_cast<std::size_t>(r)];
       M(r, nrow) = bgas[static_cast<std::size_t>(r)];
       M(nrow, r) = bgas[static_cast<std::size_t>(r)];
@@ -852,7 +864,8 @@ EquilibriumResult EquilibriumWork::solve(const EquilibriumSolver& solver, const 
           const Term& t = condensed[c];
           double affinity = t.g;
           for (int p = 0; p < t.count; ++p) {
-            affinity -= t.atoms[static_cast<std::size_t>(p)] * pi[static_cast<std::size_t>(t.row[static_cast<std::size_t>(p)])];
+            affinity -=
+                t.atoms[static_cast<std::size_t>(p)] * pi[static_cast<std::size_t>(t.row[static_cast<std::size_t>(p)])];
           }
           if (affinity < most_negative) {
             most_negative = affinity;
@@ -893,13 +906,15 @@ EquilibriumResult EquilibriumWork::solve(const EquilibriumSolver& solver, const 
           const Term& term = gas[j];
           double ln_fraction = -term.g;
           for (int p = 0; p < term.count; ++p) {
-            ln_fraction += term.atoms[static_cast<std::size_t>(p)] * pi_t[static_cast<std::size_t>(term.row[static_cast<std::size_t>(p)])];
+            ln_fraction += term.atoms[static_cast<std::size_t>(p)] *
+                           pi_t[static_cast<std::size_t>(term.row[static_cast<std::size_t>(p)])];
           }
           const double nj = std::exp(std::max(ln_fraction, kMatrixFloorLogFraction) + lnN_t);
           if (adopt) lnn[j] = std::max(ln_fraction, kStateFloorLogFraction) + lnN_t;
           sum += nj;
           for (int p = 0; p < term.count; ++p) {
-            b_t[static_cast<std::size_t>(term.row[static_cast<std::size_t>(p)])] += term.atoms[static_cast<std::size_t>(p)] * nj;
+            b_t[static_cast<std::size_t>(term.row[static_cast<std::size_t>(p)])] +=
+                term.atoms[static_cast<std::size_t>(p)] * nj;
           }
         }
         for (std::size_t c = 0; c < C; ++c) {
@@ -908,7 +923,8 @@ EquilibriumResult EquilibriumWork::solve(const EquilibriumSolver& solver, const 
           if (!(amount > 0.0)) return std::numeric_limits<double>::infinity();
           const Term& term = condensed[c];
           for (int p = 0; p < term.count; ++p) {
-            b_t[static_cast<std::size_t>(term.row[static_cast<std::size_t>(p)])] += term.atoms[static_cast<std::size_t>(p)] * amount;
+            b_t[static_cast<std::size_t>(term.row[static_cast<std::size_t>(p)])] +=
+                term.atoms[static_cast<std::size_t>(p)] * amount;
           }
           if (adopt) nc[c] = amount;
         }
@@ -1009,7 +1025,8 @@ EquilibriumResult EquilibriumWork::solve(const EquilibriumSolver& solver, const 
     frozen_cp += n[j] * t.cp;
     enthalpy += nh;
     rhs_T[nrow] -= nh;
-    for (int p = 0; p < t.count; ++p) rhs_T[t.row[static_cast<std::size_t>(p)]] -= t.atoms[static_cast<std::size_t>(p)] * nh;
+    for (int p = 0; p < t.count; ++p)
+      rhs_T[t.row[static_cast<std::size_t>(p)]] -= t.atoms[static_cast<std::size_t>(p)] * nh;
   }
   for (std::size_t c = 0; c < C; ++c) {
     if (included[c] == 0) continue;
@@ -1075,7 +1092,8 @@ EquilibriumResult EquilibriumWork::solve(const EquilibriumSolver& solver, const 
   result.frozen_heat_capacity_J_per_K = frozen_cp * kR * scale;
   result.equilibrium_heat_capacity_J_per_K = equilibrium_cp * kR * scale;
   result.element_potentials.fill(0.0);
-  for (int r = 0; r < E; ++r) result.element_potentials[element_of_row[static_cast<std::size_t>(r)]] = pi[static_cast<std::size_t>(r)];
+  for (int r = 0; r < E; ++r)
+    result.element_potentials[element_of_row[static_cast<std::size_t>(r)]] = pi[static_cast<std::size_t>(r)];
   result.element_potential_slopes = result_potential_slopes;
   result.gas_moles_slope = result_gas_moles_slope;
 

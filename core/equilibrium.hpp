@@ -8,6 +8,9 @@
 //   gas:       mu_j/RT = g_j(T)/RT + ln(n_j/n) + ln(P/P0),  P0 = 1 bar (the data's standard state)
 //   condensed: mu_c/RT = g_c(T)/RT
 //   optimum:   mu_j/RT = sum_k a_kj pi_k for every present species; sum_j a_kj n_j = b_k.
+// Cold start: the linear-programming estimate (White, Johnson & Dantzig, J. Chem. Phys. 28 (1958) 751)
+// with element potentials fitted to its major species; warm start: a nearby solution's element
+// potentials moved along their temperature slopes. Slow (factor-e) steps are extrapolated.
 // Applies to ideal gases (low-to-moderate pressure); fails (ConvergenceError) only if Newton does not
 // converge within the iteration limit, which is reported with the diagnostics, never hidden.
 // The HP problem (adiabatic flame) is solve_hp(), implemented in core/adiabatic_flame.cpp.
@@ -39,7 +42,7 @@ struct EquilibriumResult {
   int iterations = 0;                  // Newton iterations (for HP: summed over the TP solves)
   double element_residual = 0.0;       // max over elements of |b_k(products) - b_k(feed)| / b_k(feed)
   bool graphite_present = false;
-  double enthalpy_J = 0.0;             // total H of the products at T (formation enthalpies included)
+  double enthalpy_J = 0.0;                         // total H of the products at T (formation enthalpies included)
   double frozen_heat_capacity_J_per_K = 0.0;       // sum n_j cp_j, composition fixed
   double equilibrium_heat_capacity_J_per_K = 0.0;  // dH/dT at fixed P with the composition shifting
   // pi_k = lambda_k/RT per known_elements() index (0 for an element absent or in a dependent row).
@@ -48,8 +51,8 @@ struct EquilibriumResult {
   // they let a warm start at a nearby temperature begin from a first-order prediction.
   std::array<double, kElementCount> element_potential_slopes{};
   double gas_moles_slope = 0.0;
-  int temperature_iterations = 0;          // HP only: Newton steps on T
-  std::uint64_t species_key = 0;           // identifies the solver's product list (for warm starts)
+  int temperature_iterations = 0;  // HP only: Newton steps on T
+  std::uint64_t species_key = 0;   // identifies the solver's product list (for warm starts)
 
   // 0 if `formula` is not a product.
   [[nodiscard]] double mole_fraction(std::string_view formula) const;
@@ -90,10 +93,10 @@ struct EquilibriumOptions {
 class EquilibriumSolver {
  public:
   // Built once per (database, element set, candidate list); immutable; solve_*() are const and
-  // thread-safe. `candidates` empty = every database species whose elements are all among those with
-  // a nonzero amount in `elements_present`. Throws units::InputError (field "species") for an unknown
-  // candidate, a candidate containing an element not present, a duplicate, or an element present in
-  // the feed that no candidate contains.
+  // thread-safe. The solver copies the records it uses: it does not refer to `db` afterwards. `candidates` empty =
+  // every database species whose elements are all among those with a nonzero amount in `elements_present`. Throws
+  // units::InputError (field "species") for an unknown candidate, a candidate containing an element not present, a
+  // duplicate, or an element present in the feed that no candidate contains.
   EquilibriumSolver(const SpeciesDatabase& db, const ElementAmounts& elements_present,
                     std::vector<std::string> candidates = {}, EquilibriumOptions options = {});
 
@@ -130,8 +133,8 @@ class EquilibriumSolver {
     std::array<double, 7> below_mid{};
     std::array<double, 7> above_mid{};
     double mid_K = 0.0;
-    double atom_count = 0.0;                          // atoms per molecule
-    int element_count = 0;                            // entries of `elements`
+    double atom_count = 0.0;                            // atoms per molecule
+    int element_count = 0;                              // entries of `elements`
     std::array<std::size_t, kElementCount> elements{};  // indices k with atoms[k] > 0
   };
   friend struct EquilibriumWork;
@@ -144,7 +147,8 @@ class EquilibriumSolver {
   // active elements and candidates (a restricted product list may make rows dependent).
   [[nodiscard]] std::array<bool, kElementCount> independent_rows(const std::array<bool, kElementCount>& active) const;
 
-  std::vector<Candidate> candidates_;  // gases first, then condensed
+  std::shared_ptr<const std::vector<Species>> species_;  // the candidates' records (Candidate::species)
+  std::vector<Candidate> candidates_;                    // gases first, then condensed
   std::vector<std::string> names_;
   std::size_t gas_count_ = 0;
   std::array<bool, kElementCount> element_allowed_{};

@@ -1,12 +1,11 @@
 // `stackbound equilibrium` run as a user runs it: the built binary, its stdout, stderr and exit code.
 // Feeds are invented test mixtures.
 
-#include <string>
-#include <vector>
-
 #include <gtest/gtest.h>
 
 #include <nlohmann/json.hpp>
+#include <string>
+#include <vector>
 
 #include "cases/species_file.hpp"
 #include "core/adiabatic_flame.hpp"
@@ -25,15 +24,14 @@ using stackbound::testing::run_stackbound;
 
 // Wrong if the command printed values other than the library's, or missed a documented JSON key.
 TEST(EquilibriumCommand, JsonCarriesTheLibraryResult) {
-  const ProcessResult run = run_stackbound({"equilibrium", "--feed", "CH4=1, O2=2.4, N2=9.03", "--temperature",
-                                            "1800K", "--pressure", "2 bar", "--format", "json"});
+  const ProcessResult run = run_stackbound({"equilibrium", "--feed", "CH4=1, O2=2.4, N2=9.03", "--temperature", "1800K",
+                                            "--pressure", "2 bar", "--format", "json"});
   ASSERT_EQ(run.exit_code, 0) << run.err;
   EXPECT_EQ(run.err, "");
   const nlohmann::json json = nlohmann::json::parse(run.out);
   const std::vector<core::SpeciesAmount> feed{{"CH4", 1.0}, {"O2", 2.4}, {"N2", 9.03}};
   const core::ElementAmounts b = core::element_amounts(builtin_species(), feed);
-  const core::EquilibriumResult expected =
-      core::EquilibriumSolver(builtin_species(), b).solve_tp(b, 1800.0, 2e5);
+  const core::EquilibriumResult expected = core::EquilibriumSolver(builtin_species(), b).solve_tp(b, 1800.0, 2e5);
   EXPECT_TRUE(is_close(json.at("temperature_K").get<double>(), 1800.0, 1e-15));
   EXPECT_TRUE(is_close(json.at("pressure_Pa").get<double>(), 2e5, 1e-15));
   EXPECT_TRUE(is_close(json.at("total_moles").get<double>(), expected.total_gas_moles, 1e-12));
@@ -70,7 +68,8 @@ TEST(EquilibriumCommand, AdiabaticFromTheFeedTemperatureWithRestrictedProducts) 
 // Wrong if a heat loss did not lower the flame temperature.
 TEST(EquilibriumCommand, HeatLossLowersTheAdiabaticTemperature) {
   const auto temperature = [](std::vector<std::string> extra) {
-    std::vector<std::string> arguments{"equilibrium", "--feed", "CH4=1, O2=2, N2=7.52", "--adiabatic", "--format", "json"};
+    std::vector<std::string> arguments{"equilibrium", "--feed",   "CH4=1, O2=2, N2=7.52",
+                                       "--adiabatic", "--format", "json"};
     arguments.insert(arguments.end(), extra.begin(), extra.end());
     const ProcessResult run = run_stackbound(arguments);
     EXPECT_EQ(run.exit_code, 0) << run.err;
@@ -81,13 +80,11 @@ TEST(EquilibriumCommand, HeatLossLowersTheAdiabaticTemperature) {
 
 // Wrong if the text report lost its header lines, its table or the note on what the numbers are.
 TEST(EquilibriumCommand, TextReportHasHeaderTableAndNote) {
-  const ProcessResult run =
-      run_stackbound({"equilibrium", "--feed", "CH4=1, O2=0.6, N2=2.3", "--temperature", "700K"});
+  const ProcessResult run = run_stackbound({"equilibrium", "--feed", "CH4=1, O2=0.6, N2=2.3", "--temperature", "700K"});
   ASSERT_EQ(run.exit_code, 0) << run.err;
   for (const char* fragment : {"Temperature 700.00 K", "Pressure 101325 Pa (1 atm)", "Newton iterations",
                                "element-balance residual", "graphite present", "species", "mole fraction",
-                               "moles [mol]", "C(gr)", "(condensed)",
-                               "an equilibrium bound, not a measurement"}) {
+                               "moles [mol]", "C(gr)", "(condensed)", "an equilibrium bound, not a measurement"}) {
     EXPECT_NE(run.out.find(fragment), std::string::npos) << fragment << "\n" << run.out;
   }
 }

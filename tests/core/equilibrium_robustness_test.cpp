@@ -3,11 +3,11 @@
 // and the air are invented test mixtures spanning C/H/O/N/S/Ar/He systems; the grid covers
 // phi 0.1-4, 300 K to the data's upper limit (3500 K) and 0.01-100 atm.
 
+#include <gtest/gtest.h>
+
 #include <cmath>
 #include <string>
 #include <vector>
-
-#include <gtest/gtest.h>
 
 #include "cases/species_file.hpp"
 #include "core/element_amounts.hpp"
@@ -36,7 +36,9 @@ std::vector<Fuel> fuels() {
       {"CO", {{"CO", 1.0}}, 0.5},
       {"C2H2", {{"C2H2", 1.0}}, 2.5},
       {"CH3OH", {{"CH3OH", 1.0}}, 1.5},
-      {"coal-like", {{"C(gr)", 0.8}, {"H2", 0.35}, {"H2O", 0.05}, {"NH3", 0.02}, {"H2S", 0.01}}, 0.8 + 0.175 + 0.015 + 0.015},
+      {"coal-like",
+       {{"C(gr)", 0.8}, {"H2", 0.35}, {"H2O", 0.05}, {"NH3", 0.02}, {"H2S", 0.01}},
+       0.8 + 0.175 + 0.015 + 0.015},
       {"sour gas", {{"CH4", 0.9}, {"H2S", 0.1}, {"CO2", 0.05}}, 1.8 + 0.15},
       {"NH3", {{"NH3", 1.0}}, 0.75},
       {"CH4 in He", {{"CH4", 1.0}, {"He", 3.0}}, 2.0},
@@ -96,7 +98,9 @@ TEST(EquilibriumRobustness, EveryPointOfTheColdStartGridConverges) {
           ++summary.points;
           try {
             const EquilibriumResult r = solver.solve_tp(b, T, P_atm * units::kStandardAtmosphere_Pa);
-            if (r.iterations > 35) std::cout << "SLOW " << fuel.name << " " << phi << " " << T << " " << P_atm << " " << r.iterations << "\n";
+            if (r.iterations > 35)
+              std::cout << "SLOW " << fuel.name << " " << phi << " " << T << " " << P_atm << " " << r.iterations
+                        << "\n";
             check_point(r, b, summary);
           } catch (const std::exception& error) {
             ++summary.failures;
@@ -138,8 +142,8 @@ TEST(EquilibriumRobustness, AWarmStartedSweepOverTheGridConverges) {
         for (const double P_atm : {0.01, 1.0, 100.0}) {
           ++summary.points;
           try {
-            EquilibriumResult r = solver.solve_tp(b, T, P_atm * units::kStandardAtmosphere_Pa,
-                                                  have_previous ? &previous : nullptr);
+            EquilibriumResult r =
+                solver.solve_tp(b, T, P_atm * units::kStandardAtmosphere_Pa, have_previous ? &previous : nullptr);
             check_point(r, b, summary);
             previous = std::move(r);
             have_previous = true;

@@ -4,14 +4,15 @@
 
 #include "core/equilibrium.hpp"
 
+#include <gtest/gtest.h>
+
+#include <Eigen/Dense>
 #include <algorithm>
 #include <cmath>
 #include <limits>
+#include <optional>
 #include <string>
 #include <vector>
-
-#include <Eigen/Dense>
-#include <gtest/gtest.h>
 
 #include "cases/species_file.hpp"
 #include "core/adiabatic_flame.hpp"
@@ -54,7 +55,8 @@ Solved solve(const std::vector<SpeciesAmount>& feed, double T, double P = kAtm_P
 // Element totals of the result, recomputed from the species' compositions (independent of the solver).
 ElementAmounts product_elements(const EquilibriumResult& result) {
   ElementAmounts totals;
-  for (std::size_t i = 0; i < result.species.size(); ++i) totals.add_species(db().at(result.species[i]), result.moles[i]);
+  for (std::size_t i = 0; i < result.species.size(); ++i)
+    totals.add_species(db().at(result.species[i]), result.moles[i]);
   return totals;
 }
 
@@ -122,12 +124,15 @@ double largest_relative_gibbs_decrease(const EquilibriumResult& result, const st
   for (const std::size_t i : order) {
     if (static_cast<Eigen::Index>(basis.size()) == rank) break;
     Eigen::MatrixXd trial(formula.rows(), static_cast<Eigen::Index>(basis.size() + 1));
-    for (std::size_t c = 0; c < basis.size(); ++c) trial.col(static_cast<Eigen::Index>(c)) = formula.col(static_cast<Eigen::Index>(basis[c]));
+    for (std::size_t c = 0; c < basis.size(); ++c)
+      trial.col(static_cast<Eigen::Index>(c)) = formula.col(static_cast<Eigen::Index>(basis[c]));
     trial.col(static_cast<Eigen::Index>(basis.size())) = formula.col(static_cast<Eigen::Index>(i));
-    if (Eigen::FullPivLU<Eigen::MatrixXd>(trial).rank() == static_cast<Eigen::Index>(basis.size() + 1)) basis.push_back(i);
+    if (Eigen::FullPivLU<Eigen::MatrixXd>(trial).rank() == static_cast<Eigen::Index>(basis.size() + 1))
+      basis.push_back(i);
   }
   Eigen::MatrixXd B(formula.rows(), static_cast<Eigen::Index>(basis.size()));
-  for (std::size_t c = 0; c < basis.size(); ++c) B.col(static_cast<Eigen::Index>(c)) = formula.col(static_cast<Eigen::Index>(basis[c]));
+  for (std::size_t c = 0; c < basis.size(); ++c)
+    B.col(static_cast<Eigen::Index>(c)) = formula.col(static_cast<Eigen::Index>(basis[c]));
   const auto decomposition = B.colPivHouseholderQr();
   double worst = -std::numeric_limits<double>::infinity();
   for (std::size_t j = 0; j < count; ++j) {
@@ -151,8 +156,8 @@ double largest_relative_gibbs_decrease(const EquilibriumResult& result, const st
         delta[basis[c]] = -sign * step * consumed[static_cast<Eigen::Index>(c)];
         size += std::abs(delta[basis[c]]);
       }
-      worst = std::max(worst, -gibbs_change_over_RT(result.species, moles, delta, result.temperature_K,
-                                                     result.pressure_Pa) / size);
+      worst = std::max(
+          worst, -gibbs_change_over_RT(result.species, moles, delta, result.temperature_K, result.pressure_Pa) / size);
     }
   }
   return worst;
@@ -220,8 +225,8 @@ TEST(EquilibriumSolver, DefaultProductsAreEverySpeciesOfTheFeedsElementsGasesFir
   EXPECT_NE(std::find(names.begin(), names.end(), "NO"), names.end());
   ASSERT_FALSE(names.empty());
   EXPECT_EQ(names.back(), "C(gr)");
-  EXPECT_EQ(static_cast<std::size_t>(std::count_if(names.begin(), names.end(),
-                                                    [](const std::string& n) { return !db().at(n).is_gas(); })),
+  EXPECT_EQ(static_cast<std::size_t>(
+                std::count_if(names.begin(), names.end(), [](const std::string& n) { return !db().at(n).is_gas(); })),
             1u);
   EXPECT_TRUE(is_close(solver.max_temperature_K(), 3500.0, 1e-15));
 }
@@ -237,9 +242,26 @@ TEST(EquilibriumSolver, RejectsProductListsThatCannotHoldTheFeed) {
                     "species = \"SO2\": contains S, which is not in the feed");
   EXPECT_THROW_WITH(EquilibriumSolver(db(), b, {"CO2", "H2O", "N2", "CO2"}), units::InputError,
                     "species = \"CO2\": listed twice");
-  EXPECT_THROW_WITH(EquilibriumSolver(db(), element_amounts(db(), std::vector<SpeciesAmount>{{"C(gr)", 1.0}}),
-                                      {"C(gr)"}),
-                    units::InputError, "needs at least one gas species");
+  EXPECT_THROW_WITH(
+      EquilibriumSolver(db(), element_amounts(db(), std::vector<SpeciesAmount>{{"C(gr)", 1.0}}), {"C(gr)"}),
+      units::InputError, "needs at least one gas species");
+}
+
+// Wrong if the solver referred to the database it was built from after construction (a sweep keeps
+// solvers longer than a database copy may live). The freed copy's memory is overwritten by a new
+// database of the same size before the solve.
+TEST(EquilibriumSolver, OutlivesTheDatabaseItWasBuiltFrom) {
+  const ElementAmounts b = element_amounts(db(), methane_air(1.0));
+  std::optional<EquilibriumSolver> solver;
+  {
+    const SpeciesDatabase copy = db();
+    solver.emplace(copy, b);
+  }
+  const SpeciesDatabase scribble = db();  // likely to reuse the freed storage
+  const EquilibriumResult result = solver->solve_tp(b, 2000.0, kAtm_Pa);
+  const EquilibriumResult reference = EquilibriumSolver(db(), b).solve_tp(b, 2000.0, kAtm_Pa);
+  EXPECT_TRUE(is_close(result.mole_fraction("NO"), reference.mole_fraction("NO"), 1e-12));
+  EXPECT_EQ(scribble.size(), db().size());
 }
 
 // Wrong if proportions the products cannot reach were answered with a wrong composition.
@@ -272,9 +294,8 @@ struct Condition {
   double temperature_K;
   double pressure_atm;
 };
-const Condition kConditions[] = {{0.1, 300.0, 1.0},   {0.5, 1200.0, 0.01}, {1.0, 2200.0, 1.0},
-                                 {1.0, 3400.0, 100.0}, {1.5, 1800.0, 10.0}, {3.0, 900.0, 1.0},
-                                 {4.0, 2500.0, 0.01},  {0.8, 1500.0, 30.0}};
+const Condition kConditions[] = {{0.1, 300.0, 1.0},   {0.5, 1200.0, 0.01}, {1.0, 2200.0, 1.0},  {1.0, 3400.0, 100.0},
+                                 {1.5, 1800.0, 10.0}, {3.0, 900.0, 1.0},   {4.0, 2500.0, 0.01}, {0.8, 1500.0, 30.0}};
 
 // Wrong if atoms were created or lost: the balances must hold to 1e-10 relative per element.
 TEST(Equilibrium, ElementBalancesHoldToOnePartIn1e10) {
@@ -337,8 +358,7 @@ TEST(Equilibrium, SameElementTotalsGiveTheSameResultHoweverFed) {
   const Solved products = solve({{"CO2", 1.0}, {"H2O", 2.0}, {"N2", 7.52}}, 2100.0);
   ASSERT_EQ(burned.result.species, products.result.species);
   for (std::size_t i = 0; i < burned.result.species.size(); ++i) {
-    EXPECT_TRUE(is_close(burned.result.moles[i], products.result.moles[i], 1e-9, 1e-300))
-        << burned.result.species[i];
+    EXPECT_TRUE(is_close(burned.result.moles[i], products.result.moles[i], 1e-9, 1e-300)) << burned.result.species[i];
   }
 }
 
@@ -429,7 +449,8 @@ TEST(Equilibrium, AWarmStartGivesTheColdStartAnswer) {
   const EquilibriumResult nearby = solver.solve_tp(b, 1950.0, 2.0 * kAtm_Pa);
   const EquilibriumResult other_pressure = solver.solve_tp(b, 1990.0, 5.0 * kAtm_Pa);
   const EquilibriumResult other_feed = solver.solve_tp(element_amounts(db(), methane_air(0.7)), 2010.0, 2.0 * kAtm_Pa);
-  const ElementAmounts sour_b = element_amounts(db(), std::vector<SpeciesAmount>{{"CH4", 1.0}, {"H2S", 0.1}, {"O2", 2.0}});
+  const ElementAmounts sour_b =
+      element_amounts(db(), std::vector<SpeciesAmount>{{"CH4", 1.0}, {"H2S", 0.1}, {"O2", 2.0}});
   const EquilibriumResult other_solver = EquilibriumSolver(db(), sour_b).solve_tp(sour_b, 2000.0, 2.0 * kAtm_Pa);
   for (const EquilibriumResult* seed : {&nearby, &other_pressure, &other_feed, &other_solver}) {
     const EquilibriumResult warm = solver.solve_tp(b, 2000.0, 2.0 * kAtm_Pa, seed);
@@ -526,8 +547,8 @@ TEST(AdiabaticFlame, EquilibriumHeatCapacityIsTheEnthalpySlope) {
   const double dT = 0.01;
   for (const double T : {1200.0, 2200.0, 3000.0}) {
     const EquilibriumResult at = solver.solve_tp(b, T, kAtm_Pa);
-    const double slope = (solver.solve_tp(b, T + dT, kAtm_Pa).enthalpy_J - solver.solve_tp(b, T - dT, kAtm_Pa).enthalpy_J) /
-                         (2 * dT);
+    const double slope =
+        (solver.solve_tp(b, T + dT, kAtm_Pa).enthalpy_J - solver.solve_tp(b, T - dT, kAtm_Pa).enthalpy_J) / (2 * dT);
     EXPECT_TRUE(is_close(at.equilibrium_heat_capacity_J_per_K, slope, 1e-5)) << T;
     EXPECT_GE(at.equilibrium_heat_capacity_J_per_K, at.frozen_heat_capacity_J_per_K);
   }
@@ -558,8 +579,8 @@ TEST(AdiabaticFlame, HeatingValueOfMethaneMatchesTheJanafFormationEnthalpies) {
   const auto h298 = [](const char* formula) {
     return db().at(formula).enthalpy(units::kelvin(units::kReferenceTemperature_K)).value();
   };
-  const double data_difference_J = (h298("CH4") - (-74873.0)) + 2.0 * h298("O2") - (h298("CO2") - (-393522.0)) -
-                                   2.0 * (h298("H2O") - (-241826.0));
+  const double data_difference_J =
+      (h298("CH4") - (-74873.0)) + 2.0 * h298("O2") - (h298("CO2") - (-393522.0)) - 2.0 * (h298("H2O") - (-241826.0));
   EXPECT_LT(std::abs(data_difference_J), 500.0);  // the data sets agree to 0.5 kJ/mol
   // Non-fuel species (O2, N2, CO2, H2O) must add nothing.
   const std::vector<SpeciesAmount> feed{{"CH4", 2.0}, {"O2", 1.0}, {"N2", 5.0}, {"CO2", 0.5}, {"H2O", 0.3}};
@@ -612,11 +633,13 @@ TEST(AdiabaticFlame, StreamsEnterAtTheirOwnTemperatures) {
   const EquilibriumResult preheated = adiabatic_flame(db(), split);
   const std::vector<SpeciesAmount> all = methane_air(1.0);
   const ElementAmounts b = element_amounts(db(), all);
-  const double target_J = feed_enthalpy_J(db(), split[0].species, 298.15) + feed_enthalpy_J(db(), split[1].species, 700.0);
+  const double target_J =
+      feed_enthalpy_J(db(), split[0].species, 298.15) + feed_enthalpy_J(db(), split[1].species, 700.0);
   const EquilibriumResult direct = EquilibriumSolver(db(), b).solve_hp(b, target_J, kAtm_Pa);
   EXPECT_NEAR(preheated.temperature_K, direct.temperature_K, 1e-5);
   const FeedStream cold{all, 298.15};
-  EXPECT_GT(preheated.temperature_K, adiabatic_flame(db(), std::span<const FeedStream>(&cold, 1)).temperature_K + 100.0);
+  EXPECT_GT(preheated.temperature_K,
+            adiabatic_flame(db(), std::span<const FeedStream>(&cold, 1)).temperature_K + 100.0);
 }
 
 }  // namespace

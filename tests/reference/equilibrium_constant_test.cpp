@@ -10,18 +10,22 @@
 //     band that the stated data-set difference delta (in log10 K) opens around the hand solution.
 // Feeds, temperatures and pressures are our own choice (invented for these tests).
 
+#include <gtest/gtest.h>
+
+#include <fmt/format.h>
+
 #include <algorithm>
+#include <boost/math/tools/toms748_solve.hpp>
 #include <cmath>
 #include <limits>
 #include <string>
+#include <tuple>
 #include <vector>
-
-#include <boost/math/tools/toms748_solve.hpp>
-#include <gtest/gtest.h>
 
 #include "cases/species_file.hpp"
 #include "core/element_amounts.hpp"
 #include "core/equilibrium.hpp"
+#include "tests/support/published_check.hpp"
 #include "tests/support/tolerance.hpp"
 #include "units/constants.hpp"
 
@@ -160,6 +164,22 @@ Reaction nitric_oxide() {
           {-4.063, -2.487, -1.699, -1.227, -0.913}};
 }
 
+// "CO2 = CO + 1/2 O2" for the validation table.
+std::string equation(const Reaction& reaction) {
+  std::string left;
+  std::string right;
+  for (const Participant& p : reaction.species) {
+    std::string& side = p.nu < 0.0 ? left : right;
+    const double nu = std::abs(p.nu);
+    side += fmt::format("{}{}{}", side.empty() ? "" : " + ", nu == 1.0 ? "" : nu == 0.5 ? "1/2 " : fmt::format("{:g} ", nu),
+                        p.formula);
+  }
+  return left + " = " + right;
+}
+
+constexpr const char* kJanafLogKf =
+    "NIST-JANAF 4th ed. (Chase 1998), log Kf columns of tables C-095, C-093, H-064, N-005 (sum of nu log Kf)";
+
 const double kPressures_Pa[] = {0.3 * kAtm_Pa, 1.0 * kAtm_Pa, 2.0 * kBar_Pa, 8.0 * kAtm_Pa, 20.0 * kBar_Pa};
 
 // Wrong if the solver's Gibbs minimisation disagreed with the equilibrium constant of its own
@@ -205,6 +225,12 @@ TEST(SingleReaction, OurEquilibriumConstantsMatchJanafWithinTheStatedDataSetDiff
     for (std::size_t t = 0; t < reaction.temperatures_K.size(); ++t) {
       const double T = reaction.temperatures_K[t];
       const double ours = our_ln_K(reaction, T) / kLn10;
+      stackbound::testing::record_published_check(
+          {fmt::format("log10 K, {}", equation(reaction)), fmt::format("{:g} K, p0 = 1 bar", T),
+           fmt::format("{:.3f}", reaction.janaf_log10_K[t]), kJanafLogKf,
+           fmt::format("{:.3f} absolute: stated data-set difference (fit of g(T), formation enthalpy of NO)",
+                       stated_difference_log10(reaction, T)),
+           ours});
       EXPECT_LE(std::abs(ours - reaction.janaf_log10_K[t]), stated_difference_log10(reaction, T))
           << reaction.species.front().formula << " at " << T << " K: ours " << ours << ", JANAF "
           << reaction.janaf_log10_K[t];
@@ -215,9 +241,14 @@ TEST(SingleReaction, OurEquilibriumConstantsMatchJanafWithinTheStatedDataSetDiff
   };
   // Source: NIST-JANAF 4th ed., Delta_f H at 298.15 K: CO2 -393.522 (C-095), CO -110.527 (C-093),
   // H2O(g) -241.826 kJ/mol (H-064).
-  EXPECT_NEAR(h298("CO2"), -393522.0, 15.0);
-  EXPECT_NEAR(h298("CO"), -110527.0, 15.0);
-  EXPECT_NEAR(h298("H2O"), -241826.0, 15.0);
+  for (const auto& [formula, janaf_J, table] : {std::tuple{"CO2", -393522.0, "C-095"}, std::tuple{"CO", -110527.0, "C-093"},
+                                                 std::tuple{"H2O", -241826.0, "H-064"}}) {
+    stackbound::testing::record_published_check(
+        {fmt::format("enthalpy of formation, {}(g)", formula), "298.15 K", fmt::format("{:.3f} kJ/mol", janaf_J / 1e3),
+         fmt::format("NIST-JANAF 4th ed., table {}", table),
+         "0.015 kJ/mol: premise of the small stated data-set difference for CO2 and H2O", h298(formula) / 1e3});
+    EXPECT_NEAR(h298(formula), janaf_J, 15.0);
+  }
 }
 
 // Wrong if the solver's composition left the band that the JANAF constant, widened by the stated
@@ -233,6 +264,18 @@ TEST(SingleReaction, SolverLiesInsideTheJanafBandOfTheHandMethod) {
         const std::vector<double> low = hand_mole_fractions(reaction, ln_K - delta * kLn10, P);
         const std::vector<double> high = hand_mole_fractions(reaction, ln_K + delta * kLn10, P);
         const core::EquilibriumResult result = solve(reaction, T, P);
+        if (P == kAtm_Pa) {
+          // The dissociation product (second participant) at 1 atm, for the validation table.
+          const Participant& product = reaction.species[1];
+          const std::vector<double> at_janaf = hand_mole_fractions(reaction, ln_K, P);
+          stackbound::testing::record_published_check(
+              {fmt::format("mole fraction of {}, {} (invented feed)", product.formula, equation(reaction)),
+               fmt::format("{:g} K, 1 atm, feed {:g}/{:g}/{:g} mol", T, reaction.species[0].feed, reaction.species[1].feed,
+                           reaction.species[2].feed),
+               fmt::format("{:.4g} (derived: hand method with JANAF K)", at_janaf[1]), kJanafLogKf,
+               fmt::format("inside the hand-method band at K x 10^(+/-{:.3f}) (stated data-set difference)", delta),
+               result.mole_fraction(product.formula)});
+        }
         for (std::size_t i = 0; i < reaction.species.size(); ++i) {
           const double x = result.mole_fraction(reaction.species[i].formula);
           const double lower = std::min(low[i], high[i]);

@@ -7,16 +7,19 @@
 // Glassman & Yetter print theirs to the nearest 10 K ("approximate flame temperatures"), so their
 // unrounded value may lie 5 K either side and the criterion becomes 15 K + 5 K for those figures.
 
+#include <gtest/gtest.h>
+
+#include <fmt/format.h>
+
 #include <cmath>
 #include <string>
 #include <vector>
-
-#include <gtest/gtest.h>
 
 #include "cases/species_file.hpp"
 #include "core/adiabatic_flame.hpp"
 #include "core/element_amounts.hpp"
 #include "core/equilibrium.hpp"
+#include "tests/support/published_check.hpp"
 #include "units/constants.hpp"
 
 namespace stackbound::reference {
@@ -46,6 +49,19 @@ core::EquilibriumResult flame(const Fuel& fuel, double pressure_Pa, std::vector<
   return solver.solve_hp(b, core::feed_enthalpy_J(db(), feed, kT0_K), pressure_Pa);
 }
 
+// Records the comparison for docs/validation.md and asserts it.
+void expect_flame(const std::string& quantity, const std::string& conditions, double tool_K, double published_K,
+                  double tolerance_K, const std::string& source, const std::string& why) {
+  stackbound::testing::record_published_check(
+      {quantity, conditions, fmt::format("{:.0f} K", published_K), source, fmt::format("{:g} K ({})", tolerance_K, why),
+       tool_K});
+  EXPECT_NEAR(tool_K, published_K, tolerance_K) << quantity << ", " << conditions;
+}
+
+constexpr const char* kTurns = "Turns, An Introduction to Combustion, 2nd ed. (2000), App. B, Table B.1 (from memory)";
+constexpr const char* kGlassman =
+    "Glassman and Yetter, Combustion, 4th ed. (2008), Ch. 1, approximate flame temperatures (from memory)";
+
 const Fuel kHydrogen{"H2", 0.5};
 const Fuel kMethane{"CH4", 2.0};
 const Fuel kEthane{"C2H6", 3.5};
@@ -57,9 +73,13 @@ const Fuel kCarbonMonoxide{"CO", 0.5};
 // Appendix B, Table B.1, adiabatic flame temperature at 1 atm, stoichiometric with air, reactants at
 // 298 K: CH4 2226 K, C2H6 2259 K, C3H8 2267 K (from memory; C2H6 with moderate confidence).
 TEST(FlameTemperature, HydrocarbonsWithAirMatchTurnsTableB1) {
-  EXPECT_NEAR(flame(kMethane, kAtm_Pa).temperature_K, 2226.0, kHandbookTolerance_K);
-  EXPECT_NEAR(flame(kEthane, kAtm_Pa).temperature_K, 2259.0, kHandbookTolerance_K);
-  EXPECT_NEAR(flame(kPropane, kAtm_Pa).temperature_K, 2267.0, kHandbookTolerance_K);
+  const char* why = "issue criterion; handbook value recalled from memory";
+  expect_flame("adiabatic flame temperature, CH4-air", "phi = 1, 298 K, 1 atm", flame(kMethane, kAtm_Pa).temperature_K,
+               2226.0, kHandbookTolerance_K, kTurns, why);
+  expect_flame("adiabatic flame temperature, C2H6-air", "phi = 1, 298 K, 1 atm", flame(kEthane, kAtm_Pa).temperature_K,
+               2259.0, kHandbookTolerance_K, kTurns, why);
+  expect_flame("adiabatic flame temperature, C3H8-air", "phi = 1, 298 K, 1 atm", flame(kPropane, kAtm_Pa).temperature_K,
+               2267.0, kHandbookTolerance_K, kTurns, why);
 }
 
 // Wrong if hydrogen, CO or methane flames (also at 20 atm, where dissociation is weaker) were off.
@@ -69,10 +89,15 @@ TEST(FlameTemperature, HydrocarbonsWithAirMatchTurnsTableB1) {
 // (from memory). Printed to the nearest 10 K: criterion 15 K + 5 K.
 TEST(FlameTemperature, HydrogenCarbonMonoxideAndMethaneMatchGlassmanAndYetter) {
   const double tolerance_K = kHandbookTolerance_K + kTenKelvinRounding_K;
-  EXPECT_NEAR(flame(kHydrogen, kAtm_Pa).temperature_K, 2400.0, tolerance_K);
-  EXPECT_NEAR(flame(kCarbonMonoxide, kAtm_Pa).temperature_K, 2400.0, tolerance_K);
-  EXPECT_NEAR(flame(kMethane, kAtm_Pa).temperature_K, 2210.0, tolerance_K);
-  EXPECT_NEAR(flame(kMethane, 20.0 * kAtm_Pa).temperature_K, 2270.0, tolerance_K);
+  const char* why = "issue criterion 15 K plus 5 K for values printed to the nearest 10 K";
+  expect_flame("adiabatic flame temperature, H2-air", "stoichiometric, 298 K, 1 atm",
+               flame(kHydrogen, kAtm_Pa).temperature_K, 2400.0, tolerance_K, kGlassman, why);
+  expect_flame("adiabatic flame temperature, CO-air", "stoichiometric, 298 K, 1 atm",
+               flame(kCarbonMonoxide, kAtm_Pa).temperature_K, 2400.0, tolerance_K, kGlassman, why);
+  expect_flame("adiabatic flame temperature, CH4-air", "stoichiometric, 298 K, 1 atm",
+               flame(kMethane, kAtm_Pa).temperature_K, 2210.0, tolerance_K, kGlassman, why);
+  expect_flame("adiabatic flame temperature, CH4-air", "stoichiometric, 298 K, 20 atm",
+               flame(kMethane, 20.0 * kAtm_Pa).temperature_K, 2270.0, tolerance_K, kGlassman, why);
 }
 
 // NIST-JANAF 4th ed. (Chase 1998) figures for the complete-combustion check:
@@ -110,9 +135,9 @@ double our_increment_J(const char* formula, double T) {
 struct FrozenCase {
   Fuel fuel;
   std::vector<std::string> products;
-  std::vector<double> product_moles;          // per mol fuel, in `products` order
-  std::vector<const double (*)[5]> janaf;     // JANAF increments of each product
-  std::vector<double> janaf_formation_kJ;     // JANAF Delta_f H of each product
+  std::vector<double> product_moles;       // per mol fuel, in `products` order
+  std::vector<const double (*)[5]> janaf;  // JANAF increments of each product
+  std::vector<double> janaf_formation_kJ;  // JANAF Delta_f H of each product
   double janaf_fuel_formation_kJ;
   // Complete-combustion temperature derived from the NIST-JANAF tables named above: the T solving
   // sum_p n_p [Delta_f H_p + (H - H298)_p(T)] = Delta_f H_fuel, linear interpolation in the 100 K
@@ -139,8 +164,13 @@ TEST(FlameTemperature, CompleteCombustionReproducesTheJanafDerivedValuesAndBound
        {kJanafFormationCO2, kJanafFormationH2O, 0.0},
        kJanafFormationCH4,
        2327.0},
-      {kCarbonMonoxide, {"CO2", "N2"}, {1.0, 1.88}, {&kJanafCO2, &kJanafN2}, {kJanafFormationCO2, 0.0},
-       kJanafFormationCO, 2664.0},
+      {kCarbonMonoxide,
+       {"CO2", "N2"},
+       {1.0, 1.88},
+       {&kJanafCO2, &kJanafN2},
+       {kJanafFormationCO2, 0.0},
+       kJanafFormationCO,
+       2664.0},
   };
   for (const FrozenCase& c : cases) {
     const core::EquilibriumResult frozen = flame(c.fuel, kAtm_Pa, c.products);
@@ -165,6 +195,11 @@ TEST(FlameTemperature, CompleteCombustionReproducesTheJanafDerivedValuesAndBound
     // Fuel and O2 formation enthalpies of our data at 298.15 K also enter dQ (O2 is ~0 by construction).
     dQ += c.fuel.oxygen * formation_J("O2") + 3.76 * c.fuel.oxygen * formation_J("N2");
     const double expected_K = T + (dQ - dH) / cp;
+    stackbound::testing::record_published_check(
+        {fmt::format("complete-combustion flame temperature, {}-air", c.fuel.formula),
+         "stoichiometric, 298.15 K, 1 atm, no dissociation", fmt::format("{:.0f} K", T),
+         "derived from NIST-JANAF 4th ed. formation enthalpies and H-H298 columns (tables named in the test)",
+         fmt::format("3 K after the computed data-set shift of {:+.1f} K", (dQ - dH) / cp), frozen.temperature_K});
     EXPECT_NEAR(frozen.temperature_K, expected_K, 3.0)
         << c.fuel.formula << ": data-set shift " << (dQ - dH) / cp << " K from the JANAF-derived " << T << " K";
     const double equilibrium_K = flame(c.fuel, kAtm_Pa).temperature_K;
