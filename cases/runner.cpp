@@ -191,6 +191,7 @@ RunResult run_case(const CaseDefinition& definition, const core::SpeciesDatabase
 
   // Bounds on the report's bases.
   const em::FFactor fd = em::FFactor::from_scm_per_J(em::FFactorKind::dry, combustion.f_factors.fd_m3_per_J);
+  result.pollutants.reserve(definition.report.pollutants.size());
   for (const std::string& name : definition.report.pollutants) {
     const em::Pollutant pollutant = em::pollutant_by_name(name, "report.pollutants");
     em::StackEmissionInput input{

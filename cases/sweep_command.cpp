@@ -2,6 +2,8 @@
 
 #include <unistd.h>
 
+#include <array>
+#include <charconv>
 #include <cstdio>
 #include <iterator>
 #include <map>
@@ -118,7 +120,13 @@ class CsvSweepWriter {
     }
     if (point.result) {
       fmt::format_to(std::back_inserter(line), ",ok");
-      for (const double value : run_metric_values(*point.result)) fmt::format_to(std::back_inserter(line), ",{:.8g}", value);
+      for (const double value : run_metric_values(*point.result)) {
+        // to_chars: the same 8 significant digits as "{:.8g}", at a fraction of the cost per row.
+        std::array<char, 32> digits{};
+        const auto end = std::to_chars(digits.data(), digits.data() + digits.size(), value, std::chars_format::general, 8).ptr;
+        line.push_back(',');
+        line.append(digits.data(), end);
+      }
       fmt::format_to(std::back_inserter(line), ",\n");
     } else {
       fmt::format_to(std::back_inserter(line), ",failed{},{}\n", std::string(metric_count_, ','), csv_cell(point.error));
