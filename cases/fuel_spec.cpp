@@ -22,18 +22,6 @@ std::vector<GasComponent> percentages(const YamlField& mapping) {
   return items;
 }
 
-// Core errors name the field but not the file position: prefix the location of the node.
-template <typename Build>
-auto located(const std::string& location, Build build) -> decltype(build()) {
-  try {
-    return build();
-  } catch (const units::InputError& error) {
-    const std::string message = error.what();
-    if (location.empty() || message.rfind(location.substr(0, location.find(':')), 0) == 0) throw;
-    throw units::InputError(fmt::format("{}: {}", location, message));
-  }
-}
-
 }  // namespace
 
 FuelSpec read_fuel_spec(const YamlField& fuel, bool blend_part) {
@@ -101,7 +89,7 @@ core::Fuel build_fuel(const FuelSpec& spec, const core::SpeciesDatabase& databas
   const std::string& field = spec.field;
   if (!spec.preset.empty()) {
     const core::Fuel fuel =
-        located(spec.kind_location, [&] { return core::preset_fuel(spec.preset, database, field + ".preset"); });
+        with_location(spec.kind_location, [&] { return core::preset_fuel(spec.preset, database, field + ".preset"); });
     return spec.name.empty() ? fuel : fuel.with_name(spec.name);
   }
   if (!spec.gas.empty()) {
@@ -110,7 +98,7 @@ core::Fuel build_fuel(const FuelSpec& spec, const core::SpeciesDatabase& databas
     for (const GasComponent& c : spec.gas) gas.composition_percent.emplace_back(c.formula, c.percent);
     gas.basis = spec.gas_basis == "mass" ? core::CompositionBasis::mass : core::CompositionBasis::mole;
     gas.field = field + ".gas";
-    return located(spec.kind_location, [&] { return core::Fuel::gas(gas, database); });
+    return with_location(spec.kind_location, [&] { return core::Fuel::gas(gas, database); });
   }
   if (!spec.ultimate.empty()) {
     core::CondensedFuelSpec fuel;
@@ -140,14 +128,14 @@ core::Fuel build_fuel(const FuelSpec& spec, const core::SpeciesDatabase& databas
     }
     fuel.specific_heat_J_per_kg_K = spec.specific_heat_J_per_kg_K;
     fuel.field = field;
-    return located(spec.location, [&] { return core::Fuel::condensed(fuel, database); });
+    return with_location(spec.location, [&] { return core::Fuel::condensed(fuel, database); });
   }
   std::vector<core::BlendPart> parts;
   for (const auto& [part, fraction] : spec.blend) parts.push_back({build_fuel(part, database), fraction * 100.0});
   const core::BlendBasis basis = spec.blend_by == "mole"   ? core::BlendBasis::mole
                                  : spec.blend_by == "heat" ? core::BlendBasis::heat_input
                                                            : core::BlendBasis::mass;
-  return located(spec.kind_location, [&] {
+  return with_location(spec.kind_location, [&] {
     return core::Fuel::blend(spec.name.empty() ? "fuel blend" : spec.name, parts, basis, field + ".blend");
   });
 }

@@ -20,20 +20,6 @@ namespace {
 
 namespace em = stackbound::emissions;
 
-// Core errors name the field but not the file position: prefix the location of the section.
-template <typename F>
-auto located(const std::string& location, F&& step) -> decltype(step()) {
-  try {
-    return step();
-  } catch (const em::MissingContextError&) {
-    throw;
-  } catch (const units::InputError& error) {
-    const std::string message = error.what();
-    if (location.empty() || message.rfind(location, 0) == 0) throw;
-    throw units::InputError(fmt::format("{}: {}", location, message));
-  }
-}
-
 core::Oxidant build_oxidant(const AirSpec& air) {
   core::OxidantOptions options;
   options.temperature = units::kelvin(air.temperature_K);
@@ -68,7 +54,7 @@ core::OperatingPoint build_operating_point(const CaseDefinition& definition) {
 // "35 ppm, dry, O2=3%" -> a concentration of `pollutant` on that basis.
 em::Concentration stated_concentration(const SourceText& source, const em::Pollutant& pollutant,
                                        const units::NormalConditions& normal) {
-  return located(source.location, [&] {
+  return with_location(source.location, [&] {
     const em::StatedValue stated = em::split_stated_value(source.text, source.path);
     const em::Basis basis = em::parse_basis(stated.rest, source.path, &normal);
     return em::Concentration(stated.number, pollutant, basis, source.path);
@@ -86,11 +72,11 @@ std::string percent(double fraction) { return fmt::format("{:.2f} %", fraction *
 
 RunResult run_case(const CaseDefinition& definition, const core::SpeciesDatabase& database, const RunOptions& options) {
   const core::Fuel fuel = options.fuel != nullptr ? *options.fuel : build_fuel(definition.fuel.fuel, database);
-  const core::Oxidant oxidant = located(definition.origin, [&] { return build_oxidant(definition.air); });
+  const core::Oxidant oxidant = with_location(definition.origin, [&] { return build_oxidant(definition.air); });
   const core::OperatingPoint op = build_operating_point(definition);
   const core::CombustionResult combustion =
-      located(definition.operating.location, [&] { return core::burn(fuel, oxidant, op, database); });
-  const core::FuelFeed feed = located(definition.fuel.feed_rate_text.location, [&] {
+      with_location(definition.operating.location, [&] { return core::burn(fuel, oxidant, op, database); });
+  const core::FuelFeed feed = with_location(definition.fuel.feed_rate_text.location, [&] {
     return core::resolve_feed(fuel, definition.fuel.feed_rate, core::HeatInputBasis::hhv, "fuel.feed_rate");
   });
   const core::CombustionRates rates = core::rates(combustion, feed);
@@ -103,13 +89,13 @@ RunResult run_case(const CaseDefinition& definition, const core::SpeciesDatabase
   for (std::size_t k = 0; k < core::kElementCount; ++k) present[k] = elements.moles[k] > 0.0;
   const bool reuse = options.solver != nullptr && options.solver_elements == present;
   const std::shared_ptr<const core::EquilibriumSolver> solver_ptr =
-      reuse ? options.solver : located(firing.location, [&] {
+      reuse ? options.solver : with_location(firing.location, [&] {
         return std::make_shared<const core::EquilibriumSolver>(database, elements, firing.species);
       });
   const core::EquilibriumSolver& solver = *solver_ptr;
   const core::EquilibriumResult* warm =
       options.warm_start != nullptr && options.warm_start->species == solver.species() ? options.warm_start : nullptr;
-  const core::EquilibriumResult equilibrium = located(firing.location, [&] {
+  const core::EquilibriumResult equilibrium = with_location(firing.location, [&] {
     if (firing.adiabatic) {
       const double target = combustion.reactant_enthalpy_J_per_kg - firing.heat_loss_fraction * combustion.hhv_J_per_kg;
       return solver.solve_hp(elements, target, firing.pressure_Pa, warm);
@@ -125,7 +111,7 @@ RunResult run_case(const CaseDefinition& definition, const core::SpeciesDatabase
   // Reference O2: the user's value, or the plant type's preset.
   const em::ReferenceO2Preset* preset = nullptr;
   if (!definition.plant_type.empty()) {
-    preset = located(definition.plant_type_location,
+    preset = with_location(definition.plant_type_location,
                      [&] { return &em::reference_o2_preset(definition.plant_type, "case.plant_type"); });
   }
   if (preset == nullptr && !definition.report.reference_o2_fraction) {
@@ -231,7 +217,7 @@ RunResult run_case(const CaseDefinition& definition, const core::SpeciesDatabase
                                           limit.limit.location, limit.pollutant,
                                           fmt::join(definition.report.pollutants, ", ")));
     }
-    em::ScreeningResult screening = located(limit.limit.location, [&] {
+    em::ScreeningResult screening = with_location(limit.limit.location, [&] {
       const std::string& text = limit.limit.text;
       // A concentration unit ("mg/Nm3", "ppm") makes a concentration limit; anything else is a rate.
       const std::string rest = em::split_stated_value(text, limit.limit.path).rest;
@@ -261,7 +247,7 @@ RunResult run_case(const CaseDefinition& definition, const core::SpeciesDatabase
   if (measured.o2) {
     const em::Concentration o2 = stated_concentration(*measured.o2, em::pollutant_by_name("O2", "o2"), normal);
     const em::Basis dry_percent = em::make_basis(em::mole_unit("%"), em::Moisture::dry, em::DiluentReference::as_measured());
-    const double value = located(measured.o2->location, [&] { return o2.to(dry_percent, context).value(); });
+    const double value = with_location(measured.o2->location, [&] { return o2.to(dry_percent, context).value(); });
     measured_o2_dry = value / 100.0;
     MeasuredComparison row{"O2", measured.o2->text, "%, dry", value, result.stack_o2_dry * 100.0, "%", ""};
     if (std::abs(row.measured - row.model) > kO2MismatchPoints) {
@@ -290,8 +276,8 @@ RunResult run_case(const CaseDefinition& definition, const core::SpeciesDatabase
     if (!source) return;
     const em::Pollutant pollutant = em::pollutant_by_name(name, source->path);
     const em::Concentration stated = stated_concentration(*source, pollutant, normal);
-    const double value = located(source->location, [&] { return stated.to(at_reference, measured_context).value(); });
-    const double bound = located(definition.origin, [&] {
+    const double value = with_location(source->location, [&] { return stated.to(at_reference, measured_context).value(); });
+    const double bound = with_location(definition.origin, [&] {
       return em::Concentration::from_mole_fraction(wet_fraction_of(equilibrium, name), pollutant, em::Moisture::wet)
           .to(at_reference, context)
           .value();

@@ -12,6 +12,7 @@
 
 #include <yaml-cpp/yaml.h>
 
+#include "units/input_error.hpp"
 #include "units/quantity_parser.hpp"
 
 namespace stackbound::cases {
@@ -59,5 +60,20 @@ class YamlField {
   std::string origin_;
   std::string path_;
 };
+
+// Runs `step`; an InputError it throws (from a layer that knows field names but not file positions)
+// is rethrown with `location` ("file:line:column") in front, unless it already starts with that
+// file's name or no location is known.
+template <typename Step>
+auto with_location(const std::string& location, Step&& step) -> decltype(step()) {
+  try {
+    return step();
+  } catch (const units::InputError& error) {
+    const std::string message = error.what();
+    const std::string file = location.substr(0, location.find(':'));
+    if (location.empty() || message.rfind(file, 0) == 0) throw;
+    throw units::InputError(location + ": " + message);
+  }
+}
 
 }  // namespace stackbound::cases

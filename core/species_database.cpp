@@ -50,7 +50,7 @@ std::size_t SpeciesDatabase::index_of(std::string_view formula, std::string_view
   if (const auto suggestion = units::nearest_name(formula, names)) {
     message += fmt::format("; did you mean \"{}\"?", *suggestion);
   }
-  message += fmt::format(" Known species (formulas are case-sensitive): {}", fmt::join(names, ", "));
+  message += fmt::format("; known species (formulas are case-sensitive): {}", fmt::join(names, ", "));
   throw units::InputError(message);
 }
 
