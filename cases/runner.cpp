@@ -1,12 +1,12 @@
 #include "cases/runner.hpp"
 
 #include <algorithm>
-#include <charconv>
 #include <cmath>
 
 #include <fmt/format.h>
 
 #include "cases/fuel_spec.hpp"
+#include "cases/yaml_reader.hpp"
 #include "emissions/basis.hpp"
 #include "emissions/cautions.hpp"
 #include "emissions/concentration.hpp"
