@@ -206,7 +206,7 @@ RunResult run_case(const CaseDefinition& definition, const core::SpeciesDatabase
     result.pollutants.push_back({name, input.pollutant_wet_fraction, std::move(emission)});
   }
 
-  if (!options.limits_and_measurements) return result;
+  if (!options.full_report) return result;
 
   // Limits: a concentration limit (unit of concentration) or a rate limit (kg/h, lb/MMBtu ...).
   for (const LimitSpec& limit : definition.report.limits) {

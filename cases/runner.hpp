@@ -100,8 +100,10 @@ struct RunOptions {
   // was built for the same elements; the caller guarantees the same firing.species.
   std::shared_ptr<const core::EquilibriumSolver> solver;
   std::array<bool, core::kElementCount> solver_elements{};
-  // Screen against report.limits and compare with stack.measured. Sweeps, which print neither, skip it.
-  bool limits_and_measurements = true;
+  // Everything after the emission figures: limit screening, measured values beside the bound,
+  // findings, assumptions and cautions. Sweeps, which print none of these per point (their outputs
+  // carry the standard cautions once), switch it off; RunResult then holds the figures only.
+  bool full_report = true;
 };
 
 // Runs one case. Throws units::InputError with the case file's location for bad input, and

@@ -215,7 +215,7 @@ void run_point(const CaseDefinition& base, const std::vector<VarySpec>& vary, co
     if (!fuel_varied && !state.fuel) state.fuel = build_fuel(definition.fuel.fuel, database);
     RunOptions options;
     options.record_factors = false;
-    options.limits_and_measurements = false;
+    options.full_report = false;
     options.fuel = fuel_varied ? nullptr : &*state.fuel;
     options.warm_start = state.previous ? &*state.previous : nullptr;
     options.solver = state.solver;
