@@ -70,7 +70,7 @@ std::string percent(double fraction) { return fmt::format("{:.2f} %", fraction *
 
 }  // namespace
 
-RunResult run_case(const CaseDefinition& definition, const core::SpeciesDatabase& database, const RunOptions& options) {
+RunResult run_case(CaseDefinition definition, const core::SpeciesDatabase& database, const RunOptions& options) {
   const core::Fuel fuel = options.fuel != nullptr ? *options.fuel : build_fuel(definition.fuel.fuel, database);
   const core::Oxidant oxidant = with_location(definition.origin, [&] { return build_oxidant(definition.air); });
   const core::OperatingPoint op = build_operating_point(definition);
@@ -142,7 +142,7 @@ RunResult run_case(const CaseDefinition& definition, const core::SpeciesDatabase
   context.record_factors = options.record_factors;
 
   RunResult result{
-      .definition = definition,
+      .definition = {},  // moved in before returning: the steps below still read `definition`
       .fuel = fuel,
       .oxidant = oxidant,
       .combustion = combustion,
@@ -206,7 +206,10 @@ RunResult run_case(const CaseDefinition& definition, const core::SpeciesDatabase
     result.pollutants.push_back({name, input.pollutant_wet_fraction, std::move(emission)});
   }
 
-  if (!options.full_report) return result;
+  if (!options.full_report) {
+    result.definition = std::move(definition);
+    return result;
+  }
 
   // Limits: a concentration limit (unit of concentration) or a rate limit (kg/h, lb/MMBtu ...).
   for (const LimitSpec& limit : definition.report.limits) {
@@ -366,6 +369,7 @@ RunResult run_case(const CaseDefinition& definition, const core::SpeciesDatabase
       result.caution_keys.emplace_back(entry.key);
     }
   }
+  result.definition = std::move(definition);
   return result;
 }
 

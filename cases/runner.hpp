@@ -108,7 +108,8 @@ struct RunOptions {
 
 // Runs one case. Throws units::InputError with the case file's location for bad input, and
 // core::ConvergenceError if the equilibrium does not converge.
-RunResult run_case(const CaseDefinition& definition, const core::SpeciesDatabase& database, const RunOptions& options = {});
+// Takes the definition by value: it ends up in RunResult::definition (pass an rvalue to avoid a copy).
+RunResult run_case(CaseDefinition definition, const core::SpeciesDatabase& database, const RunOptions& options = {});
 
 // Thresholds of the findings (our choices, common practice, no source; printed in the report).
 inline constexpr double kO2MismatchPoints = 0.5;          // measured vs model flue O2, percentage points (dry)

@@ -197,7 +197,8 @@ std::vector<double> values_at(const std::vector<VarySpec>& vary, std::size_t ind
 // One worker's state between its points: the previous equilibrium (warm start), the solver, and the
 // fuel, built once when no point changes it.
 struct WorkerState {
-  std::optional<core::EquilibriumResult> previous;
+  const core::EquilibriumResult* previous = nullptr;  // the worker's last result (owned by a batch or `kept`)
+  std::optional<core::EquilibriumResult> kept;        // the last result of the previous batch
   std::shared_ptr<const core::EquilibriumSolver> solver;
   std::array<bool, core::kElementCount> solver_elements{};
   std::optional<core::Fuel> fuel;
@@ -217,11 +218,11 @@ void run_point(const CaseDefinition& base, const std::vector<VarySpec>& vary, co
     options.record_factors = false;
     options.full_report = false;
     options.fuel = fuel_varied ? nullptr : &*state.fuel;
-    options.warm_start = state.previous ? &*state.previous : nullptr;
+    options.warm_start = state.previous;
     options.solver = state.solver;
     options.solver_elements = state.solver_elements;
-    point.result = run_case(definition, database, options);
-    state.previous = point.result->equilibrium;
+    point.result = run_case(std::move(definition), database, options);
+    state.previous = &point.result->equilibrium;
     state.solver = point.result->solver;
     state.solver_elements = point.result->solver_elements;
   } catch (const std::exception& error) {
@@ -254,7 +255,13 @@ std::size_t run_sweep(const CaseDefinition& base, const std::vector<VarySpec>& v
       const std::size_t end = std::min(count, begin + slice);
       if (begin >= end) break;
       workers.emplace_back([&, t, begin, end] {
-        for (std::size_t i = begin; i < end; ++i) run_point(base, vary, database, batch[i], workers_state[t]);
+        WorkerState& state = workers_state[t];
+        for (std::size_t i = begin; i < end; ++i) run_point(base, vary, database, batch[i], state);
+        // The batch is handed to the sink next: keep a copy of the last result for the next batch.
+        if (state.previous != nullptr && !(state.kept && state.previous == &*state.kept)) {
+          state.kept = *state.previous;
+          state.previous = &*state.kept;
+        }
       });
     }
     for (std::thread& worker : workers) worker.join();
