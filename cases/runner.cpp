@@ -126,7 +126,7 @@ RunResult run_case(CaseDefinition definition, const core::SpeciesDatabase& datab
   if (preset != nullptr) {
     const em::ReferenceO2Choice choice = em::choose_reference_o2(*preset, definition.report.reference_o2_fraction);
     reference_o2 = choice.o2_dry_fraction;
-    reference_text = choice.text();
+    if (options.full_report) reference_text = choice.text();  // report text only; sweeps skip the formatting
     from_preset = choice.from_preset;
   } else {
     reference_o2 = *definition.report.reference_o2_fraction;
