@@ -1,14 +1,6 @@
 // The fuel file reader, and `stackbound fuel` run as a user runs it: the built binary, its stdout,
 // stderr and exit code.
 
-#include <sys/wait.h>
-#include <unistd.h>
-
-#include <array>
-#include <cstdio>
-#include <filesystem>
-#include <fstream>
-#include <iterator>
 #include <string>
 #include <vector>
 
