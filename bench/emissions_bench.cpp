@@ -3,7 +3,7 @@
 // The flue gas is an invented, typical natural-gas composition.
 #include <benchmark/benchmark.h>
 
-#include "emissions/emission_rate.hpp"
+#include "stackbound/emissions/emission_rate.hpp"
 
 namespace {
 

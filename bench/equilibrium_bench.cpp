@@ -4,10 +4,10 @@
 
 #include <vector>
 
-#include "cases/species_file.hpp"
-#include "core/adiabatic_flame.hpp"
-#include "core/element_amounts.hpp"
-#include "core/equilibrium.hpp"
+#include "stackbound/cases/species_file.hpp"
+#include "stackbound/core/adiabatic_flame.hpp"
+#include "stackbound/core/element_amounts.hpp"
+#include "stackbound/core/equilibrium.hpp"
 
 namespace {
 

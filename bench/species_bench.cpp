@@ -1,7 +1,7 @@
 // Cost of the thermodynamic property evaluations that the equilibrium solver's inner loop makes.
 #include <benchmark/benchmark.h>
 
-#include "cases/species_file.hpp"
+#include "stackbound/cases/species_file.hpp"
 
 namespace {
 

@@ -9,9 +9,9 @@
 
 #include <benchmark/benchmark.h>
 
-#include "cases/case_file.hpp"
-#include "cases/species_file.hpp"
-#include "cases/sweep.hpp"
+#include "stackbound/cases/case_file.hpp"
+#include "stackbound/cases/species_file.hpp"
+#include "stackbound/cases/sweep.hpp"
 
 namespace {
 

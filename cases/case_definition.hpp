@@ -8,7 +8,7 @@
 #include <string>
 #include <vector>
 
-#include "units/quantity_parser.hpp"
+#include "stackbound/units/quantity_parser.hpp"
 
 namespace stackbound::cases {
 

@@ -1,4 +1,4 @@
-#include "cases/case_file.hpp"
+#include "stackbound/cases/case_file.hpp"
 
 #include <cmath>
 #include <fstream>
@@ -6,9 +6,9 @@
 
 #include <fmt/format.h>
 
-#include "cases/fuel_spec.hpp"
-#include "cases/yaml_reader.hpp"
-#include "units/input_error.hpp"
+#include "stackbound/cases/fuel_spec.hpp"
+#include "stackbound/cases/yaml_reader.hpp"
+#include "stackbound/units/input_error.hpp"
 
 namespace stackbound::cases {
 

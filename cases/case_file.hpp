@@ -6,7 +6,7 @@
 #include <string>
 #include <string_view>
 
-#include "cases/case_definition.hpp"
+#include "stackbound/cases/case_definition.hpp"
 
 namespace stackbound::cases {
 

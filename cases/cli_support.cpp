@@ -1,11 +1,11 @@
-#include "cases/cli_support.hpp"
+#include "stackbound/cases/cli_support.hpp"
 
 #include <filesystem>
 #include <iostream>
 
 #include <fmt/format.h>
 
-#include "units/input_error.hpp"
+#include "stackbound/units/input_error.hpp"
 
 namespace stackbound::cases {
 

@@ -9,7 +9,7 @@
 
 #include <CLI/CLI.hpp>
 
-#include "core/species_database.hpp"
+#include "stackbound/core/species_database.hpp"
 
 namespace stackbound::cases {
 

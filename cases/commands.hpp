@@ -4,7 +4,7 @@
 
 #include <CLI/CLI.hpp>
 
-#include "cases/cli_support.hpp"
+#include "stackbound/cases/cli_support.hpp"
 
 namespace stackbound::cases {
 

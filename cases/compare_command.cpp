@@ -5,14 +5,14 @@
 
 #include <nlohmann/json.hpp>
 
-#include "cases/case_file.hpp"
-#include "cases/commands.hpp"
-#include "cases/run_metrics.hpp"
-#include "cases/run_report.hpp"
-#include "cases/species_file.hpp"
-#include "emissions/cautions.hpp"
-#include "emissions/report.hpp"
-#include "units/input_error.hpp"
+#include "stackbound/cases/case_file.hpp"
+#include "stackbound/cases/commands.hpp"
+#include "stackbound/cases/run_metrics.hpp"
+#include "stackbound/cases/run_report.hpp"
+#include "stackbound/cases/species_file.hpp"
+#include "stackbound/emissions/cautions.hpp"
+#include "stackbound/emissions/report.hpp"
+#include "stackbound/units/input_error.hpp"
 
 namespace stackbound::cases {
 

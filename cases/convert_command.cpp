@@ -12,15 +12,15 @@
 
 #include <nlohmann/json.hpp>
 
-#include "cases/commands.hpp"
-#include "emissions/basis.hpp"
-#include "emissions/cautions.hpp"
-#include "emissions/concentration.hpp"
-#include "emissions/pollutant.hpp"
-#include "emissions/reference_correction.hpp"
-#include "units/input_error.hpp"
-#include "units/normal_conditions.hpp"
-#include "units/quantity_parser.hpp"
+#include "stackbound/cases/commands.hpp"
+#include "stackbound/emissions/basis.hpp"
+#include "stackbound/emissions/cautions.hpp"
+#include "stackbound/emissions/concentration.hpp"
+#include "stackbound/emissions/pollutant.hpp"
+#include "stackbound/emissions/reference_correction.hpp"
+#include "stackbound/units/input_error.hpp"
+#include "stackbound/units/normal_conditions.hpp"
+#include "stackbound/units/quantity_parser.hpp"
 
 namespace stackbound::cases {
 

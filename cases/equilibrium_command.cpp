@@ -9,14 +9,14 @@
 #include <nlohmann/json.hpp>
 #include <numeric>
 
-#include "cases/commands.hpp"
-#include "cases/species_file.hpp"
-#include "core/adiabatic_flame.hpp"
-#include "core/element_amounts.hpp"
-#include "core/equilibrium.hpp"
-#include "units/constants.hpp"
-#include "units/input_error.hpp"
-#include "units/quantity_parser.hpp"
+#include "stackbound/cases/commands.hpp"
+#include "stackbound/cases/species_file.hpp"
+#include "stackbound/core/adiabatic_flame.hpp"
+#include "stackbound/core/element_amounts.hpp"
+#include "stackbound/core/equilibrium.hpp"
+#include "stackbound/units/constants.hpp"
+#include "stackbound/units/input_error.hpp"
+#include "stackbound/units/quantity_parser.hpp"
 
 namespace stackbound::cases {
 

@@ -12,16 +12,16 @@
 
 #include <nlohmann/json.hpp>
 
-#include "cases/commands.hpp"
-#include "cases/fuel_file.hpp"
-#include "cases/species_file.hpp"
-#include "core/combustion.hpp"
-#include "core/elements.hpp"
-#include "core/fuel_presets.hpp"
-#include "units/constants.hpp"
-#include "units/input_error.hpp"
-#include "units/normal_conditions.hpp"
-#include "units/quantity_parser.hpp"
+#include "stackbound/cases/commands.hpp"
+#include "stackbound/cases/fuel_file.hpp"
+#include "stackbound/cases/species_file.hpp"
+#include "stackbound/core/combustion.hpp"
+#include "stackbound/core/elements.hpp"
+#include "stackbound/core/fuel_presets.hpp"
+#include "stackbound/units/constants.hpp"
+#include "stackbound/units/input_error.hpp"
+#include "stackbound/units/normal_conditions.hpp"
+#include "stackbound/units/quantity_parser.hpp"
 
 namespace stackbound::cases {
 

@@ -1,4 +1,4 @@
-#include "cases/fuel_file.hpp"
+#include "stackbound/cases/fuel_file.hpp"
 
 #include <fstream>
 #include <sstream>
@@ -6,8 +6,8 @@
 
 #include <fmt/format.h>
 
-#include "cases/fuel_spec.hpp"
-#include "units/input_error.hpp"
+#include "stackbound/cases/fuel_spec.hpp"
+#include "stackbound/units/input_error.hpp"
 
 namespace stackbound::cases {
 

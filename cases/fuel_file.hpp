@@ -8,10 +8,10 @@
 #include <string>
 #include <string_view>
 
-#include "cases/yaml_reader.hpp"
-#include "core/fuel.hpp"
-#include "core/species_database.hpp"
-#include "units/quantity_parser.hpp"
+#include "stackbound/cases/yaml_reader.hpp"
+#include "stackbound/core/fuel.hpp"
+#include "stackbound/core/species_database.hpp"
+#include "stackbound/units/quantity_parser.hpp"
 
 namespace stackbound::cases {
 

@@ -1,9 +1,9 @@
-#include "cases/fuel_spec.hpp"
+#include "stackbound/cases/fuel_spec.hpp"
 
 #include <fmt/format.h>
 
-#include "core/fuel_presets.hpp"
-#include "units/input_error.hpp"
+#include "stackbound/core/fuel_presets.hpp"
+#include "stackbound/units/input_error.hpp"
 
 namespace stackbound::cases {
 

@@ -4,10 +4,10 @@
 
 #include <string>
 
-#include "cases/case_definition.hpp"
-#include "cases/yaml_reader.hpp"
-#include "core/fuel.hpp"
-#include "core/species_database.hpp"
+#include "stackbound/cases/case_definition.hpp"
+#include "stackbound/cases/yaml_reader.hpp"
+#include "stackbound/core/fuel.hpp"
+#include "stackbound/core/species_database.hpp"
 
 namespace stackbound::cases {
 

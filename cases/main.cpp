@@ -5,8 +5,8 @@
 
 #include <CLI/CLI.hpp>
 
-#include "cases/commands.hpp"
-#include "units/input_error.hpp"
+#include "stackbound/cases/commands.hpp"
+#include "stackbound/units/input_error.hpp"
 
 int main(int argc, char** argv) {
   namespace sb = stackbound::cases;

@@ -1,10 +1,10 @@
 // `stackbound run CASE.yaml [--format text|json|csv|html] [--output FILE]`: the main job.
 
-#include "cases/case_file.hpp"
-#include "cases/commands.hpp"
-#include "cases/run_report.hpp"
-#include "cases/runner.hpp"
-#include "cases/species_file.hpp"
+#include "stackbound/cases/case_file.hpp"
+#include "stackbound/cases/commands.hpp"
+#include "stackbound/cases/run_report.hpp"
+#include "stackbound/cases/runner.hpp"
+#include "stackbound/cases/species_file.hpp"
 
 namespace stackbound::cases {
 

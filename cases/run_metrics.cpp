@@ -1,8 +1,8 @@
-#include "cases/run_metrics.hpp"
+#include "stackbound/cases/run_metrics.hpp"
 
 #include <fmt/format.h>
 
-#include "emissions/reference_correction.hpp"
+#include "stackbound/emissions/reference_correction.hpp"
 
 namespace stackbound::cases {
 

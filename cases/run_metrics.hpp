@@ -5,7 +5,7 @@
 #include <string>
 #include <vector>
 
-#include "cases/runner.hpp"
+#include "stackbound/cases/runner.hpp"
 
 namespace stackbound::cases {
 

@@ -1,9 +1,9 @@
-#include "cases/run_report.hpp"
+#include "stackbound/cases/run_report.hpp"
 
 #include <fmt/format.h>
 
-#include "emissions/reference_correction.hpp"
-#include "units/constants.hpp"
+#include "stackbound/emissions/reference_correction.hpp"
+#include "stackbound/units/constants.hpp"
 
 namespace stackbound::cases {
 

@@ -4,8 +4,8 @@
 
 #include <nlohmann/json.hpp>
 
-#include "cases/runner.hpp"
-#include "emissions/report.hpp"
+#include "stackbound/cases/runner.hpp"
+#include "stackbound/emissions/report.hpp"
 
 namespace stackbound::cases {
 

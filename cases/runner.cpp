@@ -1,18 +1,18 @@
-#include "cases/runner.hpp"
+#include "stackbound/cases/runner.hpp"
 
 #include <algorithm>
 #include <cmath>
 
 #include <fmt/format.h>
 
-#include "cases/fuel_spec.hpp"
-#include "cases/yaml_reader.hpp"
-#include "emissions/basis.hpp"
-#include "emissions/cautions.hpp"
-#include "emissions/concentration.hpp"
-#include "emissions/pollutant.hpp"
-#include "units/constants.hpp"
-#include "units/input_error.hpp"
+#include "stackbound/cases/fuel_spec.hpp"
+#include "stackbound/cases/yaml_reader.hpp"
+#include "stackbound/emissions/basis.hpp"
+#include "stackbound/emissions/cautions.hpp"
+#include "stackbound/emissions/concentration.hpp"
+#include "stackbound/emissions/pollutant.hpp"
+#include "stackbound/units/constants.hpp"
+#include "stackbound/units/input_error.hpp"
 
 namespace stackbound::cases {
 

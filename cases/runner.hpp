@@ -15,15 +15,15 @@
 #include <string>
 #include <vector>
 
-#include "cases/case_definition.hpp"
-#include "core/combustion.hpp"
-#include "core/equilibrium.hpp"
-#include "core/fuel.hpp"
-#include "core/oxidant.hpp"
-#include "core/species_database.hpp"
-#include "emissions/emission_rate.hpp"
-#include "emissions/limit_screening.hpp"
-#include "emissions/reference_o2_presets.hpp"
+#include "stackbound/cases/case_definition.hpp"
+#include "stackbound/core/combustion.hpp"
+#include "stackbound/core/equilibrium.hpp"
+#include "stackbound/core/fuel.hpp"
+#include "stackbound/core/oxidant.hpp"
+#include "stackbound/core/species_database.hpp"
+#include "stackbound/emissions/emission_rate.hpp"
+#include "stackbound/emissions/limit_screening.hpp"
+#include "stackbound/emissions/reference_o2_presets.hpp"
 
 namespace stackbound::cases {
 

@@ -4,11 +4,11 @@
 
 #include <nlohmann/json.hpp>
 
-#include "cases/commands.hpp"
-#include "cases/species_file.hpp"
-#include "units/constants.hpp"
-#include "units/input_error.hpp"
-#include "units/quantity_parser.hpp"
+#include "stackbound/cases/commands.hpp"
+#include "stackbound/cases/species_file.hpp"
+#include "stackbound/units/constants.hpp"
+#include "stackbound/units/input_error.hpp"
+#include "stackbound/units/quantity_parser.hpp"
 
 namespace stackbound::cases {
 

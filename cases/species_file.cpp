@@ -1,4 +1,4 @@
-#include "cases/species_file.hpp"
+#include "stackbound/cases/species_file.hpp"
 
 #include <fstream>
 #include <sstream>
@@ -6,7 +6,7 @@
 #include <fmt/format.h>
 #include <yaml-cpp/yaml.h>
 
-#include "units/input_error.hpp"
+#include "stackbound/units/input_error.hpp"
 
 namespace stackbound::cases {
 

@@ -6,8 +6,8 @@
 #include <string_view>
 #include <vector>
 
-#include "core/species.hpp"
-#include "core/species_database.hpp"
+#include "stackbound/core/species.hpp"
+#include "stackbound/core/species_database.hpp"
 
 namespace stackbound::cases {
 

@@ -1,4 +1,4 @@
-#include "cases/sweep.hpp"
+#include "stackbound/cases/sweep.hpp"
 
 #include <algorithm>
 #include <array>
@@ -8,11 +8,11 @@
 
 #include <fmt/format.h>
 
-#include "cases/fuel_spec.hpp"
-#include "core/equilibrium.hpp"
-#include "units/input_error.hpp"
-#include "units/nearest_name.hpp"
-#include "units/quantity_parser.hpp"
+#include "stackbound/cases/fuel_spec.hpp"
+#include "stackbound/core/equilibrium.hpp"
+#include "stackbound/units/input_error.hpp"
+#include "stackbound/units/nearest_name.hpp"
+#include "stackbound/units/quantity_parser.hpp"
 
 namespace stackbound::cases {
 

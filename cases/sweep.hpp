@@ -11,9 +11,9 @@
 #include <string_view>
 #include <vector>
 
-#include "cases/case_definition.hpp"
-#include "cases/runner.hpp"
-#include "core/species_database.hpp"
+#include "stackbound/cases/case_definition.hpp"
+#include "stackbound/cases/runner.hpp"
+#include "stackbound/core/species_database.hpp"
 
 namespace stackbound::cases {
 

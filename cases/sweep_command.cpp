@@ -10,14 +10,14 @@
 
 #include <fmt/format.h>
 
-#include "cases/case_file.hpp"
-#include "cases/commands.hpp"
-#include "cases/run_metrics.hpp"
-#include "cases/run_report.hpp"
-#include "cases/species_file.hpp"
-#include "cases/sweep.hpp"
-#include "emissions/cautions.hpp"
-#include "emissions/report.hpp"
+#include "stackbound/cases/case_file.hpp"
+#include "stackbound/cases/commands.hpp"
+#include "stackbound/cases/run_metrics.hpp"
+#include "stackbound/cases/run_report.hpp"
+#include "stackbound/cases/species_file.hpp"
+#include "stackbound/cases/sweep.hpp"
+#include "stackbound/emissions/cautions.hpp"
+#include "stackbound/emissions/report.hpp"
 
 namespace stackbound::cases {
 

@@ -12,8 +12,8 @@
 
 #include <yaml-cpp/yaml.h>
 
-#include "units/input_error.hpp"
-#include "units/quantity_parser.hpp"
+#include "stackbound/units/input_error.hpp"
+#include "stackbound/units/quantity_parser.hpp"
 
 namespace stackbound::cases {
 

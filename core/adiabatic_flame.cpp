@@ -1,13 +1,13 @@
-#include "core/adiabatic_flame.hpp"
+#include "stackbound/core/adiabatic_flame.hpp"
 
 #include <fmt/format.h>
 
 #include <algorithm>
 #include <cmath>
 
-#include "core/elements.hpp"
-#include "core/fuel.hpp"
-#include "units/input_error.hpp"
+#include "stackbound/core/elements.hpp"
+#include "stackbound/core/fuel.hpp"
+#include "stackbound/units/input_error.hpp"
 
 namespace stackbound::core {
 

@@ -14,11 +14,11 @@
 #include <string>
 #include <vector>
 
-#include "core/element_amounts.hpp"
-#include "core/equilibrium.hpp"
-#include "core/fuel.hpp"
-#include "core/species_database.hpp"
-#include "units/constants.hpp"
+#include "stackbound/core/element_amounts.hpp"
+#include "stackbound/core/equilibrium.hpp"
+#include "stackbound/core/fuel.hpp"
+#include "stackbound/core/species_database.hpp"
+#include "stackbound/units/constants.hpp"
 
 namespace stackbound::core {
 

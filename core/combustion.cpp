@@ -1,4 +1,4 @@
-#include "core/combustion.hpp"
+#include "stackbound/core/combustion.hpp"
 
 #include <algorithm>
 #include <cmath>
@@ -7,11 +7,11 @@
 #include <boost/math/tools/roots.hpp>
 #include <fmt/format.h>
 
-#include "core/elements.hpp"
-#include "core/humidity.hpp"
-#include "units/constants.hpp"
-#include "units/input_error.hpp"
-#include "units/normal_conditions.hpp"
+#include "stackbound/core/elements.hpp"
+#include "stackbound/core/humidity.hpp"
+#include "stackbound/units/constants.hpp"
+#include "stackbound/units/input_error.hpp"
+#include "stackbound/units/normal_conditions.hpp"
 
 namespace stackbound::core {
 

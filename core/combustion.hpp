@@ -27,11 +27,11 @@
 #include <utility>
 #include <vector>
 
-#include "core/fuel.hpp"
-#include "core/oxidant.hpp"
-#include "core/species_database.hpp"
-#include "units/quantities.hpp"
-#include "units/quantity_parser.hpp"
+#include "stackbound/core/fuel.hpp"
+#include "stackbound/core/oxidant.hpp"
+#include "stackbound/core/species_database.hpp"
+#include "stackbound/units/quantities.hpp"
+#include "stackbound/units/quantity_parser.hpp"
 
 namespace stackbound::core {
 

@@ -1,12 +1,12 @@
-#include "core/element_amounts.hpp"
+#include "stackbound/core/element_amounts.hpp"
 
 #include <fmt/format.h>
 
 #include <cmath>
 
-#include "core/elements.hpp"
-#include "units/constants.hpp"
-#include "units/input_error.hpp"
+#include "stackbound/core/elements.hpp"
+#include "stackbound/units/constants.hpp"
+#include "stackbound/units/input_error.hpp"
 
 namespace stackbound::core {
 

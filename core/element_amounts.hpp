@@ -10,7 +10,7 @@
 #include <string_view>
 #include <vector>
 
-#include "core/species_database.hpp"
+#include "stackbound/core/species_database.hpp"
 
 namespace stackbound::core {
 

@@ -1,10 +1,10 @@
-#include "core/elements.hpp"
+#include "stackbound/core/elements.hpp"
 
 #include <algorithm>
 #include <array>
 #include <string>
 
-#include "units/input_error.hpp"
+#include "stackbound/units/input_error.hpp"
 
 namespace stackbound::core {
 

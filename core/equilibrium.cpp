@@ -1,4 +1,4 @@
-#include "core/equilibrium.hpp"
+#include "stackbound/core/equilibrium.hpp"
 
 #include <fmt/format.h>
 
@@ -7,9 +7,9 @@
 #include <cmath>
 #include <limits>
 
-#include "core/elements.hpp"
-#include "units/constants.hpp"
-#include "units/input_error.hpp"
+#include "stackbound/core/elements.hpp"
+#include "stackbound/units/constants.hpp"
+#include "stackbound/units/input_error.hpp"
 
 namespace stackbound::core {
 

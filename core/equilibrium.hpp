@@ -24,8 +24,8 @@
 #include <string_view>
 #include <vector>
 
-#include "core/element_amounts.hpp"
-#include "core/species_database.hpp"
+#include "stackbound/core/element_amounts.hpp"
+#include "stackbound/core/species_database.hpp"
 
 namespace stackbound::core {
 

@@ -1,4 +1,4 @@
-#include "core/fuel.hpp"
+#include "stackbound/core/fuel.hpp"
 
 #include <algorithm>
 #include <cassert>
@@ -8,9 +8,9 @@
 
 #include <fmt/format.h>
 
-#include "core/elements.hpp"
-#include "units/constants.hpp"
-#include "units/input_error.hpp"
+#include "stackbound/core/elements.hpp"
+#include "stackbound/units/constants.hpp"
+#include "stackbound/units/input_error.hpp"
 
 namespace stackbound::core {
 

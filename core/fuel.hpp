@@ -32,7 +32,7 @@
 #include <utility>
 #include <vector>
 
-#include "core/species_database.hpp"
+#include "stackbound/core/species_database.hpp"
 
 namespace stackbound::core {
 

@@ -1,4 +1,4 @@
-#include "core/fuel_presets.hpp"
+#include "stackbound/core/fuel_presets.hpp"
 
 #include <array>
 #include <vector>
@@ -6,8 +6,8 @@
 #include <fmt/format.h>
 #include <fmt/ranges.h>
 
-#include "units/input_error.hpp"
-#include "units/nearest_name.hpp"
+#include "stackbound/units/input_error.hpp"
+#include "stackbound/units/nearest_name.hpp"
 
 namespace stackbound::core {
 

@@ -7,7 +7,7 @@
 #include <string>
 #include <string_view>
 
-#include "core/fuel.hpp"
+#include "stackbound/core/fuel.hpp"
 
 namespace stackbound::core {
 

@@ -1,4 +1,4 @@
-#include "core/humidity.hpp"
+#include "stackbound/core/humidity.hpp"
 
 #include <array>
 #include <cmath>
@@ -7,7 +7,7 @@
 #include <boost/math/tools/roots.hpp>
 #include <fmt/format.h>
 
-#include "units/input_error.hpp"
+#include "stackbound/units/input_error.hpp"
 
 namespace stackbound::core {
 

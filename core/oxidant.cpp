@@ -1,14 +1,14 @@
-#include "core/oxidant.hpp"
+#include "stackbound/core/oxidant.hpp"
 
 #include <cmath>
 #include <numeric>
 
 #include <fmt/format.h>
 
-#include "core/elements.hpp"
-#include "core/humidity.hpp"
-#include "units/constants.hpp"
-#include "units/input_error.hpp"
+#include "stackbound/core/elements.hpp"
+#include "stackbound/core/humidity.hpp"
+#include "stackbound/units/constants.hpp"
+#include "stackbound/units/input_error.hpp"
 
 namespace stackbound::core {
 

@@ -17,8 +17,8 @@
 #include <string>
 #include <string_view>
 
-#include "core/species_database.hpp"
-#include "units/quantities.hpp"
+#include "stackbound/core/species_database.hpp"
+#include "stackbound/units/quantities.hpp"
 
 namespace stackbound::core {
 

@@ -1,12 +1,12 @@
-#include "core/species.hpp"
+#include "stackbound/core/species.hpp"
 
 #include <cmath>
 
 #include <fmt/format.h>
 
-#include "core/elements.hpp"
-#include "units/constants.hpp"
-#include "units/input_error.hpp"
+#include "stackbound/core/elements.hpp"
+#include "stackbound/units/constants.hpp"
+#include "stackbound/units/input_error.hpp"
 
 namespace stackbound::core {
 

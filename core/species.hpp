@@ -12,7 +12,7 @@
 #include <string>
 #include <vector>
 
-#include "units/quantities.hpp"
+#include "stackbound/units/quantities.hpp"
 
 namespace stackbound::core {
 

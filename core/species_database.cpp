@@ -1,11 +1,11 @@
-#include "core/species_database.hpp"
+#include "stackbound/core/species_database.hpp"
 
 #include <algorithm>
 
 #include <fmt/format.h>
 
-#include "units/input_error.hpp"
-#include "units/nearest_name.hpp"
+#include "stackbound/units/input_error.hpp"
+#include "stackbound/units/nearest_name.hpp"
 
 namespace stackbound::core {
 

@@ -7,7 +7,7 @@
 #include <string_view>
 #include <vector>
 
-#include "core/species.hpp"
+#include "stackbound/core/species.hpp"
 
 namespace stackbound::core {
 

@@ -1,4 +1,4 @@
-#include "emissions/basis.hpp"
+#include "stackbound/emissions/basis.hpp"
 
 #include <algorithm>
 #include <array>
@@ -9,10 +9,10 @@
 
 #include <fmt/format.h>
 
-#include "emissions/reference_correction.hpp"
-#include "units/constants.hpp"
-#include "units/input_error.hpp"
-#include "units/nearest_name.hpp"
+#include "stackbound/emissions/reference_correction.hpp"
+#include "stackbound/units/constants.hpp"
+#include "stackbound/units/input_error.hpp"
+#include "stackbound/units/nearest_name.hpp"
 
 namespace stackbound::emissions {
 

@@ -20,8 +20,8 @@
 #include <string>
 #include <string_view>
 
-#include "emissions/reference_o2_presets.hpp"
-#include "units/normal_conditions.hpp"
+#include "stackbound/emissions/reference_o2_presets.hpp"
+#include "stackbound/units/normal_conditions.hpp"
 
 namespace stackbound::emissions {
 

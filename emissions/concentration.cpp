@@ -1,4 +1,4 @@
-#include "emissions/concentration.hpp"
+#include "stackbound/emissions/concentration.hpp"
 
 #include <cmath>
 #include <utility>

@@ -30,10 +30,10 @@
 #include <string_view>
 #include <vector>
 
-#include "emissions/basis.hpp"
-#include "emissions/pollutant.hpp"
-#include "emissions/reference_correction.hpp"
-#include "units/input_error.hpp"
+#include "stackbound/emissions/basis.hpp"
+#include "stackbound/emissions/pollutant.hpp"
+#include "stackbound/emissions/reference_correction.hpp"
+#include "stackbound/units/input_error.hpp"
 
 namespace stackbound::emissions {
 

@@ -1,4 +1,4 @@
-#include "emissions/emission_rate.hpp"
+#include "stackbound/emissions/emission_rate.hpp"
 
 #include <array>
 #include <charconv>
@@ -6,8 +6,8 @@
 
 #include <fmt/format.h>
 
-#include "units/constants.hpp"
-#include "units/input_error.hpp"
+#include "stackbound/units/constants.hpp"
+#include "stackbound/units/input_error.hpp"
 
 namespace stackbound::emissions {
 

@@ -18,9 +18,9 @@
 #include <string_view>
 #include <vector>
 
-#include "emissions/concentration.hpp"
-#include "units/normal_conditions.hpp"
-#include "units/quantities.hpp"
+#include "stackbound/emissions/concentration.hpp"
+#include "stackbound/units/normal_conditions.hpp"
+#include "stackbound/units/quantities.hpp"
 
 namespace stackbound::emissions {
 

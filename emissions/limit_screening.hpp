@@ -10,9 +10,9 @@
 #include <string_view>
 #include <vector>
 
-#include "emissions/concentration.hpp"
-#include "emissions/emission_rate.hpp"
-#include "units/quantities.hpp"
+#include "stackbound/emissions/concentration.hpp"
+#include "stackbound/emissions/emission_rate.hpp"
+#include "stackbound/units/quantities.hpp"
 
 namespace stackbound::emissions {
 

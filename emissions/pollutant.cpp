@@ -1,4 +1,4 @@
-#include "emissions/pollutant.hpp"
+#include "stackbound/emissions/pollutant.hpp"
 
 #include <algorithm>
 #include <cctype>
@@ -7,9 +7,9 @@
 
 #include <fmt/format.h>
 
-#include "core/elements.hpp"
-#include "units/input_error.hpp"
-#include "units/nearest_name.hpp"
+#include "stackbound/core/elements.hpp"
+#include "stackbound/units/input_error.hpp"
+#include "stackbound/units/nearest_name.hpp"
 
 namespace stackbound::emissions {
 

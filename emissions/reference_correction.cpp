@@ -1,10 +1,10 @@
-#include "emissions/reference_correction.hpp"
+#include "stackbound/emissions/reference_correction.hpp"
 
 #include <cmath>
 
 #include <fmt/format.h>
 
-#include "units/input_error.hpp"
+#include "stackbound/units/input_error.hpp"
 
 namespace stackbound::emissions {
 

@@ -1,4 +1,4 @@
-#include "emissions/reference_o2_presets.hpp"
+#include "stackbound/emissions/reference_o2_presets.hpp"
 
 #include <array>
 #include <string>
@@ -6,9 +6,9 @@
 
 #include <fmt/format.h>
 
-#include "emissions/reference_correction.hpp"
-#include "units/input_error.hpp"
-#include "units/nearest_name.hpp"
+#include "stackbound/emissions/reference_correction.hpp"
+#include "stackbound/units/input_error.hpp"
+#include "stackbound/units/nearest_name.hpp"
 
 namespace stackbound::emissions {
 

@@ -1,8 +1,8 @@
 // One self-contained, print-friendly HTML page for a Report.
 #include <fmt/format.h>
 
-#include "emissions/report.hpp"
-#include "emissions/svg_plot.hpp"
+#include "stackbound/emissions/report.hpp"
+#include "stackbound/emissions/svg_plot.hpp"
 
 namespace stackbound::emissions {
 

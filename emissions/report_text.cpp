@@ -4,7 +4,7 @@
 
 #include <fmt/format.h>
 
-#include "emissions/report.hpp"
+#include "stackbound/emissions/report.hpp"
 
 namespace stackbound::emissions {
 

@@ -1,4 +1,4 @@
-#include "emissions/svg_plot.hpp"
+#include "stackbound/emissions/svg_plot.hpp"
 
 #include <algorithm>
 #include <array>

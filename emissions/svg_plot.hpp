@@ -3,7 +3,7 @@
 
 #include <string>
 
-#include "emissions/report.hpp"
+#include "stackbound/emissions/report.hpp"
 
 namespace stackbound::emissions {
 

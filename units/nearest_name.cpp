@@ -1,4 +1,4 @@
-#include "units/nearest_name.hpp"
+#include "stackbound/units/nearest_name.hpp"
 
 #include <algorithm>
 #include <cctype>

@@ -1,10 +1,10 @@
-#include "units/normal_conditions.hpp"
+#include "stackbound/units/normal_conditions.hpp"
 
 #include <array>
 #include <string>
 
-#include "units/constants.hpp"
-#include "units/input_error.hpp"
+#include "stackbound/units/constants.hpp"
+#include "stackbound/units/input_error.hpp"
 
 namespace stackbound::units {
 

@@ -7,7 +7,7 @@
 #include <string>
 #include <string_view>
 
-#include "units/quantities.hpp"
+#include "stackbound/units/quantities.hpp"
 
 namespace stackbound::units {
 

@@ -1,4 +1,4 @@
-#include "units/quantity_parser.hpp"
+#include "stackbound/units/quantity_parser.hpp"
 
 #include <algorithm>
 #include <array>
@@ -7,9 +7,9 @@
 #include <cmath>
 #include <vector>
 
-#include "units/constants.hpp"
-#include "units/input_error.hpp"
-#include "units/nearest_name.hpp"
+#include "stackbound/units/constants.hpp"
+#include "stackbound/units/input_error.hpp"
+#include "stackbound/units/nearest_name.hpp"
 
 namespace stackbound::units {
 

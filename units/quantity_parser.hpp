@@ -12,8 +12,8 @@
 #include <string>
 #include <string_view>
 
-#include "units/normal_conditions.hpp"
-#include "units/quantities.hpp"
+#include "stackbound/units/normal_conditions.hpp"
+#include "stackbound/units/quantities.hpp"
 
 namespace stackbound::units {
 

@@ -1,8 +1,8 @@
 #pragma once
 // Umbrella header of the units layer.
-#include "units/constants.hpp"
-#include "units/input_error.hpp"
-#include "units/normal_conditions.hpp"
-#include "units/quantities.hpp"
-#include "units/quantity_parser.hpp"
-#include "units/nearest_name.hpp"
+#include "stackbound/units/constants.hpp"
+#include "stackbound/units/input_error.hpp"
+#include "stackbound/units/normal_conditions.hpp"
+#include "stackbound/units/quantities.hpp"
+#include "stackbound/units/quantity_parser.hpp"
+#include "stackbound/units/nearest_name.hpp"

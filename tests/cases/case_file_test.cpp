@@ -2,7 +2,7 @@
 // message naming the file, line and column, the field, the value and what is accepted, and leave no
 // output file behind.
 
-#include "cases/case_file.hpp"
+#include "stackbound/cases/case_file.hpp"
 
 #include <filesystem>
 #include <fstream>
@@ -12,7 +12,7 @@
 
 #include "tests/support/run_binary.hpp"
 #include "tests/support/tolerance.hpp"
-#include "units/input_error.hpp"
+#include "stackbound/units/input_error.hpp"
 
 namespace stackbound::cases {
 namespace {

@@ -7,13 +7,13 @@
 #include <string>
 #include <vector>
 
-#include "cases/species_file.hpp"
-#include "core/adiabatic_flame.hpp"
-#include "core/element_amounts.hpp"
-#include "core/equilibrium.hpp"
+#include "stackbound/cases/species_file.hpp"
+#include "stackbound/core/adiabatic_flame.hpp"
+#include "stackbound/core/element_amounts.hpp"
+#include "stackbound/core/equilibrium.hpp"
 #include "tests/support/run_binary.hpp"
 #include "tests/support/tolerance.hpp"
-#include "units/constants.hpp"
+#include "stackbound/units/constants.hpp"
 
 namespace stackbound::cases {
 namespace {

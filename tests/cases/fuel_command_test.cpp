@@ -8,13 +8,13 @@
 
 #include <nlohmann/json.hpp>
 
-#include "cases/fuel_file.hpp"
-#include "cases/species_file.hpp"
-#include "core/combustion.hpp"
-#include "core/fuel_presets.hpp"
+#include "stackbound/cases/fuel_file.hpp"
+#include "stackbound/cases/species_file.hpp"
+#include "stackbound/core/combustion.hpp"
+#include "stackbound/core/fuel_presets.hpp"
 #include "tests/support/run_binary.hpp"
 #include "tests/support/tolerance.hpp"
-#include "units/input_error.hpp"
+#include "stackbound/units/input_error.hpp"
 
 namespace stackbound::cases {
 namespace {

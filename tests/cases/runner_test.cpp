@@ -1,7 +1,7 @@
 // The main job end to end: every demo case in every format, the JSON contract, the wording and
 // cautions, and the runner against the same computation made by hand through the library.
 
-#include "cases/runner.hpp"
+#include "stackbound/cases/runner.hpp"
 
 #include <filesystem>
 #include <fstream>
@@ -11,11 +11,11 @@
 
 #include <nlohmann/json.hpp>
 
-#include "cases/case_file.hpp"
-#include "cases/run_report.hpp"
-#include "cases/species_file.hpp"
-#include "core/fuel_presets.hpp"
-#include "emissions/cautions.hpp"
+#include "stackbound/cases/case_file.hpp"
+#include "stackbound/cases/run_report.hpp"
+#include "stackbound/cases/species_file.hpp"
+#include "stackbound/core/fuel_presets.hpp"
+#include "stackbound/emissions/cautions.hpp"
 #include "tests/support/run_binary.hpp"
 #include "tests/support/tolerance.hpp"
 

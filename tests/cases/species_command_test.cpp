@@ -18,11 +18,11 @@
 
 #include <nlohmann/json.hpp>
 
-#include "cases/species_file.hpp"
+#include "stackbound/cases/species_file.hpp"
 #include "tests/support/run_binary.hpp"
 #include "tests/support/tolerance.hpp"
-#include "units/constants.hpp"
-#include "units/quantity_parser.hpp"
+#include "stackbound/units/constants.hpp"
+#include "stackbound/units/quantity_parser.hpp"
 
 namespace stackbound::cases {
 namespace {

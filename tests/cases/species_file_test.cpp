@@ -1,9 +1,9 @@
-#include "cases/species_file.hpp"
+#include "stackbound/cases/species_file.hpp"
 
 #include <gtest/gtest.h>
 
 #include "tests/support/tolerance.hpp"
-#include "units/input_error.hpp"
+#include "stackbound/units/input_error.hpp"
 
 namespace stackbound::cases {
 namespace {

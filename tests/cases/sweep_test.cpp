@@ -1,7 +1,7 @@
 // Sweeps and comparisons: rows equal single runs, physical trends hold, bad specs are refused, and a
 // failing point is reported in its row while the sweep goes on.
 
-#include "cases/sweep.hpp"
+#include "stackbound/cases/sweep.hpp"
 
 #include <algorithm>
 #include <sstream>
@@ -11,11 +11,11 @@
 
 #include <nlohmann/json.hpp>
 
-#include "cases/case_file.hpp"
-#include "cases/species_file.hpp"
+#include "stackbound/cases/case_file.hpp"
+#include "stackbound/cases/species_file.hpp"
 #include "tests/support/run_binary.hpp"
 #include "tests/support/tolerance.hpp"
-#include "units/input_error.hpp"
+#include "stackbound/units/input_error.hpp"
 
 namespace stackbound::cases {
 namespace {

@@ -1,16 +1,16 @@
-#include "core/combustion.hpp"
+#include "stackbound/core/combustion.hpp"
 
 #include <cmath>
 
 #include <gtest/gtest.h>
 
-#include "cases/species_file.hpp"
-#include "core/fuel_presets.hpp"
-#include "core/humidity.hpp"
+#include "stackbound/cases/species_file.hpp"
+#include "stackbound/core/fuel_presets.hpp"
+#include "stackbound/core/humidity.hpp"
 #include "tests/support/tolerance.hpp"
-#include "units/constants.hpp"
-#include "units/input_error.hpp"
-#include "units/normal_conditions.hpp"
+#include "stackbound/units/constants.hpp"
+#include "stackbound/units/input_error.hpp"
+#include "stackbound/units/normal_conditions.hpp"
 
 namespace stackbound::core {
 namespace {

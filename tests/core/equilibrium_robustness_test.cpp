@@ -9,11 +9,11 @@
 #include <string>
 #include <vector>
 
-#include "cases/species_file.hpp"
-#include "core/element_amounts.hpp"
-#include "core/elements.hpp"
-#include "core/equilibrium.hpp"
-#include "units/constants.hpp"
+#include "stackbound/cases/species_file.hpp"
+#include "stackbound/core/element_amounts.hpp"
+#include "stackbound/core/elements.hpp"
+#include "stackbound/core/equilibrium.hpp"
+#include "stackbound/units/constants.hpp"
 
 namespace stackbound::core {
 namespace {

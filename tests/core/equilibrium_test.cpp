@@ -2,7 +2,7 @@
 // helpers (core/element_amounts.hpp): properties every solution must have, and bad input.
 // All feeds here are invented test mixtures.
 
-#include "core/equilibrium.hpp"
+#include "stackbound/core/equilibrium.hpp"
 
 #include <gtest/gtest.h>
 
@@ -14,13 +14,13 @@
 #include <string>
 #include <vector>
 
-#include "cases/species_file.hpp"
-#include "core/adiabatic_flame.hpp"
-#include "core/element_amounts.hpp"
-#include "core/elements.hpp"
+#include "stackbound/cases/species_file.hpp"
+#include "stackbound/core/adiabatic_flame.hpp"
+#include "stackbound/core/element_amounts.hpp"
+#include "stackbound/core/elements.hpp"
 #include "tests/support/tolerance.hpp"
-#include "units/constants.hpp"
-#include "units/input_error.hpp"
+#include "stackbound/units/constants.hpp"
+#include "stackbound/units/input_error.hpp"
 
 namespace stackbound::core {
 namespace {

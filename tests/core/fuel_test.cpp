@@ -1,13 +1,13 @@
-#include "core/fuel.hpp"
+#include "stackbound/core/fuel.hpp"
 
 #include <gtest/gtest.h>
 
-#include "cases/species_file.hpp"
-#include "core/elements.hpp"
-#include "core/fuel_presets.hpp"
+#include "stackbound/cases/species_file.hpp"
+#include "stackbound/core/elements.hpp"
+#include "stackbound/core/fuel_presets.hpp"
 #include "tests/support/tolerance.hpp"
-#include "units/constants.hpp"
-#include "units/input_error.hpp"
+#include "stackbound/units/constants.hpp"
+#include "stackbound/units/input_error.hpp"
 
 namespace stackbound::core {
 namespace {

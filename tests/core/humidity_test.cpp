@@ -1,9 +1,9 @@
-#include "core/humidity.hpp"
+#include "stackbound/core/humidity.hpp"
 
 #include <gtest/gtest.h>
 
 #include "tests/support/tolerance.hpp"
-#include "units/input_error.hpp"
+#include "stackbound/units/input_error.hpp"
 
 namespace stackbound::core {
 namespace {

@@ -1,11 +1,11 @@
-#include "core/species.hpp"
+#include "stackbound/core/species.hpp"
 
 #include <gtest/gtest.h>
 
-#include "cases/species_file.hpp"
+#include "stackbound/cases/species_file.hpp"
 #include "tests/support/tolerance.hpp"
-#include "units/constants.hpp"
-#include "units/input_error.hpp"
+#include "stackbound/units/constants.hpp"
+#include "stackbound/units/input_error.hpp"
 
 namespace stackbound::core {
 namespace {

@@ -1,15 +1,15 @@
-#include "emissions/basis.hpp"
+#include "stackbound/emissions/basis.hpp"
 
 #include <string>
 #include <vector>
 
 #include <gtest/gtest.h>
 
-#include "emissions/concentration.hpp"
+#include "stackbound/emissions/concentration.hpp"
 #include "tests/support/tolerance.hpp"
-#include "units/constants.hpp"
-#include "units/input_error.hpp"
-#include "units/quantity_parser.hpp"
+#include "stackbound/units/constants.hpp"
+#include "stackbound/units/input_error.hpp"
+#include "stackbound/units/quantity_parser.hpp"
 
 namespace stackbound::emissions {
 namespace {

@@ -1,4 +1,4 @@
-#include "emissions/cautions.hpp"
+#include "stackbound/emissions/cautions.hpp"
 
 #include <algorithm>
 #include <set>

@@ -1,4 +1,4 @@
-#include "emissions/concentration.hpp"
+#include "stackbound/emissions/concentration.hpp"
 
 #include <string>
 #include <vector>
@@ -6,7 +6,7 @@
 #include <gtest/gtest.h>
 
 #include "tests/support/tolerance.hpp"
-#include "units/input_error.hpp"
+#include "stackbound/units/input_error.hpp"
 
 namespace stackbound::emissions {
 namespace {

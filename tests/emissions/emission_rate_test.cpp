@@ -1,11 +1,11 @@
-#include "emissions/emission_rate.hpp"
+#include "stackbound/emissions/emission_rate.hpp"
 
 #include <gtest/gtest.h>
 
 #include "tests/support/tolerance.hpp"
-#include "units/constants.hpp"
-#include "units/input_error.hpp"
-#include "units/quantity_parser.hpp"
+#include "stackbound/units/constants.hpp"
+#include "stackbound/units/input_error.hpp"
+#include "stackbound/units/quantity_parser.hpp"
 
 namespace stackbound::emissions {
 namespace {

@@ -1,4 +1,4 @@
-#include "emissions/limit_screening.hpp"
+#include "stackbound/emissions/limit_screening.hpp"
 
 #include <algorithm>
 #include <cctype>
@@ -7,7 +7,7 @@
 #include <gtest/gtest.h>
 
 #include "tests/support/tolerance.hpp"
-#include "units/input_error.hpp"
+#include "stackbound/units/input_error.hpp"
 
 namespace stackbound::emissions {
 namespace {

@@ -1,9 +1,9 @@
-#include "emissions/pollutant.hpp"
+#include "stackbound/emissions/pollutant.hpp"
 
 #include <gtest/gtest.h>
 
 #include "tests/support/tolerance.hpp"
-#include "units/input_error.hpp"
+#include "stackbound/units/input_error.hpp"
 
 namespace stackbound::emissions {
 namespace {

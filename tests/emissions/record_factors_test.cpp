@@ -5,11 +5,11 @@
 
 #include <gtest/gtest.h>
 
-#include "emissions/concentration.hpp"
-#include "emissions/emission_rate.hpp"
-#include "emissions/limit_screening.hpp"
+#include "stackbound/emissions/concentration.hpp"
+#include "stackbound/emissions/emission_rate.hpp"
+#include "stackbound/emissions/limit_screening.hpp"
 #include "tests/support/tolerance.hpp"
-#include "units/input_error.hpp"
+#include "stackbound/units/input_error.hpp"
 
 namespace stackbound::emissions {
 namespace {

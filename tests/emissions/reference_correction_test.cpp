@@ -1,9 +1,9 @@
-#include "emissions/reference_correction.hpp"
+#include "stackbound/emissions/reference_correction.hpp"
 
 #include <gtest/gtest.h>
 
 #include "tests/support/tolerance.hpp"
-#include "units/input_error.hpp"
+#include "stackbound/units/input_error.hpp"
 
 namespace stackbound::emissions {
 namespace {

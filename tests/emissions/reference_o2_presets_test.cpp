@@ -1,9 +1,9 @@
-#include "emissions/reference_o2_presets.hpp"
+#include "stackbound/emissions/reference_o2_presets.hpp"
 
 #include <gtest/gtest.h>
 
 #include "tests/support/tolerance.hpp"
-#include "units/input_error.hpp"
+#include "stackbound/units/input_error.hpp"
 
 namespace stackbound::emissions {
 namespace {

@@ -22,12 +22,12 @@
 #include <tuple>
 #include <vector>
 
-#include "cases/species_file.hpp"
-#include "core/element_amounts.hpp"
-#include "core/equilibrium.hpp"
+#include "stackbound/cases/species_file.hpp"
+#include "stackbound/core/element_amounts.hpp"
+#include "stackbound/core/equilibrium.hpp"
 #include "tests/support/published_check.hpp"
 #include "tests/support/tolerance.hpp"
-#include "units/constants.hpp"
+#include "stackbound/units/constants.hpp"
 
 namespace stackbound::reference {
 namespace {

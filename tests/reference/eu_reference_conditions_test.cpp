@@ -9,10 +9,10 @@
 #include <fmt/format.h>
 #include <gtest/gtest.h>
 
-#include "emissions/emissions.hpp"
+#include "stackbound/emissions/emissions.hpp"
 #include "tests/support/published_check.hpp"
 #include "tests/support/tolerance.hpp"
-#include "units/normal_conditions.hpp"
+#include "stackbound/units/normal_conditions.hpp"
 
 namespace stackbound::emissions {
 namespace {

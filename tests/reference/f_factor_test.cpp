@@ -5,13 +5,13 @@
 #include <fmt/format.h>
 #include <gtest/gtest.h>
 
-#include "cases/species_file.hpp"
-#include "core/combustion.hpp"
-#include "core/fuel_presets.hpp"
+#include "stackbound/cases/species_file.hpp"
+#include "stackbound/core/combustion.hpp"
+#include "stackbound/core/fuel_presets.hpp"
 #include "tests/support/published_check.hpp"
 #include "tests/support/tolerance.hpp"
-#include "units/constants.hpp"
-#include "units/quantity_parser.hpp"
+#include "stackbound/units/constants.hpp"
+#include "stackbound/units/quantity_parser.hpp"
 
 namespace stackbound::core {
 namespace {

@@ -4,12 +4,12 @@
 
 #include <gtest/gtest.h>
 
-#include "cases/species_file.hpp"
-#include "core/fuel.hpp"
-#include "core/fuel_presets.hpp"
+#include "stackbound/cases/species_file.hpp"
+#include "stackbound/core/fuel.hpp"
+#include "stackbound/core/fuel_presets.hpp"
 #include "tests/support/published_check.hpp"
 #include "tests/support/tolerance.hpp"
-#include "units/quantity_parser.hpp"
+#include "stackbound/units/quantity_parser.hpp"
 
 namespace stackbound::core {
 namespace {

@@ -18,11 +18,11 @@
 #include <fmt/format.h>
 #include <gtest/gtest.h>
 
-#include "cases/species_file.hpp"
-#include "core/species.hpp"
+#include "stackbound/cases/species_file.hpp"
+#include "stackbound/core/species.hpp"
 #include "tests/support/published_check.hpp"
 #include "tests/support/tolerance.hpp"
-#include "units/constants.hpp"
+#include "stackbound/units/constants.hpp"
 
 namespace stackbound::reference {
 namespace {

@@ -6,10 +6,10 @@
 #include <fmt/format.h>
 #include <gtest/gtest.h>
 
-#include "emissions/emission_rate.hpp"
+#include "stackbound/emissions/emission_rate.hpp"
 #include "tests/support/published_check.hpp"
 #include "tests/support/tolerance.hpp"
-#include "units/normal_conditions.hpp"
+#include "stackbound/units/normal_conditions.hpp"
 
 namespace stackbound::emissions {
 namespace {

@@ -6,10 +6,10 @@
 #include <fmt/format.h>
 #include <gtest/gtest.h>
 
-#include "cases/species_file.hpp"
-#include "core/combustion.hpp"
-#include "core/fuel_presets.hpp"
-#include "core/humidity.hpp"
+#include "stackbound/cases/species_file.hpp"
+#include "stackbound/core/combustion.hpp"
+#include "stackbound/core/fuel_presets.hpp"
+#include "stackbound/core/humidity.hpp"
 #include "tests/support/published_check.hpp"
 #include "tests/support/tolerance.hpp"
 

@@ -1,9 +1,9 @@
-#include "units/normal_conditions.hpp"
+#include "stackbound/units/normal_conditions.hpp"
 
 #include <gtest/gtest.h>
 
 #include "tests/support/tolerance.hpp"
-#include "units/input_error.hpp"
+#include "stackbound/units/input_error.hpp"
 
 namespace stackbound::units {
 namespace {

@@ -1,4 +1,4 @@
-#include "units/quantity_parser.hpp"
+#include "stackbound/units/quantity_parser.hpp"
 
 #include <cmath>
 #include <random>
@@ -8,7 +8,7 @@
 #include <gtest/gtest.h>
 
 #include "tests/support/tolerance.hpp"
-#include "units/input_error.hpp"
+#include "stackbound/units/input_error.hpp"
 
 namespace stackbound::units {
 namespace {
