@@ -43,6 +43,10 @@ std::span<const std::string_view> sweep_parameter_names() { return kNames; }
 
 std::string_view sweep_parameter_name(SweepParameter parameter) { return kNames[static_cast<std::size_t>(parameter)]; }
 
+std::string sweep_parameter_label(SweepParameter parameter) {
+  return std::string(sweep_parameter_name(parameter)) + " [" + std::string(sweep_parameter_unit(parameter)) + "]";
+}
+
 std::string_view sweep_parameter_unit(SweepParameter parameter) {
   switch (dimension_of(parameter)) {
     case Dimension::temperature: return "K";

@@ -34,6 +34,8 @@ std::span<const std::string_view> sweep_parameter_names();
 std::string_view sweep_parameter_name(SweepParameter parameter);
 // Column unit of a parameter's values in outputs: "%", "K" or "kPa".
 std::string_view sweep_parameter_unit(SweepParameter parameter);
+// Column title with the unit, e.g. "excess_air [%]".
+std::string sweep_parameter_label(SweepParameter parameter);
 // SI value -> the number printed in that unit.
 double sweep_parameter_display(SweepParameter parameter, double value_si);
 

@@ -1,13 +1,13 @@
 # Install rules and a CMake package, so that another project can
-#   find_package(stackbound) ; target_link_libraries(app PRIVATE stackbound::cases)
+#   find_package(stackbound) ; target_link_libraries(app PRIVATE stackbound::render)   # or any lower layer
 include(CMakePackageConfigHelpers)
 
-install(TARGETS stackbound_units stackbound_core stackbound_emissions stackbound_cases
+install(TARGETS stackbound_units stackbound_core stackbound_emissions stackbound_cases stackbound_render
         EXPORT stackboundTargets
         ARCHIVE DESTINATION ${CMAKE_INSTALL_LIBDIR}
         LIBRARY DESTINATION ${CMAKE_INSTALL_LIBDIR})
 install(TARGETS stackbound RUNTIME DESTINATION ${CMAKE_INSTALL_BINDIR})
-foreach(layer units core emissions cases)
+foreach(layer units core emissions cases render)
   install(DIRECTORY ${PROJECT_SOURCE_DIR}/${layer}/
           DESTINATION ${CMAKE_INSTALL_INCLUDEDIR}/stackbound/${layer}
           FILES_MATCHING PATTERN "*.hpp" PATTERN "examples" EXCLUDE)

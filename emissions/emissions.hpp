@@ -1,7 +1,6 @@
 #pragma once
 // Umbrella header of the emissions layer: concentration bases and conversions, O2/CO2 reference
-// correction, emission rates (Method 19 F-factors), reference-O2 presets, limit screening, cautions,
-// and the report document with its renderers.
+// correction, emission rates (Method 19 F-factors), reference-O2 presets, limit screening, cautions.
 #include "stackbound/emissions/basis.hpp"
 #include "stackbound/emissions/cautions.hpp"
 #include "stackbound/emissions/concentration.hpp"
@@ -10,5 +9,3 @@
 #include "stackbound/emissions/pollutant.hpp"
 #include "stackbound/emissions/reference_correction.hpp"
 #include "stackbound/emissions/reference_o2_presets.hpp"
-#include "stackbound/emissions/report.hpp"
-#include "stackbound/emissions/svg_plot.hpp"

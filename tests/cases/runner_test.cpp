@@ -12,7 +12,7 @@
 #include <nlohmann/json.hpp>
 
 #include "stackbound/cases/case_file.hpp"
-#include "stackbound/cases/run_report.hpp"
+#include "stackbound/cases/run_document.hpp"
 #include "stackbound/cases/species_file.hpp"
 #include "stackbound/core/fuel_presets.hpp"
 #include "stackbound/emissions/cautions.hpp"

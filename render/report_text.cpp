@@ -1,12 +1,12 @@
-// Aligned terminal text and CSV renderings of a Report.
+// Aligned terminal text of a report document.
 #include <algorithm>
 #include <cctype>
 
 #include <fmt/format.h>
 
-#include "stackbound/emissions/report.hpp"
+#include "stackbound/render/report_renderers.hpp"
 
-namespace stackbound::emissions {
+namespace stackbound::render {
 
 namespace {
 
@@ -46,25 +46,6 @@ void append_wrapped(std::string& out, const std::string& prefix, const std::stri
     start = end + 1;
   }
   out += line + "\n";
-}
-
-std::string csv_cell(const std::string& cell) {
-  if (cell.find_first_of(",\"\n") == std::string::npos) return cell;
-  std::string quoted = "\"";
-  for (const char c : cell) {
-    if (c == '"') quoted += '"';
-    quoted += c;
-  }
-  return quoted + "\"";
-}
-
-std::string csv_line(const std::vector<std::string>& cells) {
-  std::string line;
-  for (std::size_t i = 0; i < cells.size(); ++i) {
-    if (i > 0) line += ',';
-    line += csv_cell(cells[i]);
-  }
-  return line + "\n";
 }
 
 }  // namespace
@@ -110,18 +91,4 @@ std::string render_text(const Report& report) {
   return out;
 }
 
-std::string render_csv(const Report& report) {
-  std::string out = csv_line({"# " + report.title});
-  if (!report.subtitle.empty()) out += csv_line({"# " + report.subtitle});
-  for (const auto& [label, value] : report.summary) out += csv_line({"# " + label, value});
-  for (const std::string& flag : report.flags) out += csv_line({"# finding: " + flag});
-  for (const std::string& caution : report.cautions) out += csv_line({"# caution: " + caution});
-  for (const ReportTable& table : report.tables) {
-    out += "\n" + csv_line({"# " + table.title});
-    out += csv_line(table.columns);
-    for (const auto& row : table.rows) out += csv_line(row);
-  }
-  return out;
-}
-
-}  // namespace stackbound::emissions
+}  // namespace stackbound::render

@@ -4,9 +4,9 @@
 
 #include <CLI/CLI.hpp>
 
-#include "stackbound/cases/cli_support.hpp"
+#include "stackbound/cli/cli_support.hpp"
 
-namespace stackbound::cases {
+namespace stackbound::cli {
 
 void add_species_command(CLI::App& app, const GlobalOptions& global);
 void add_equilibrium_command(CLI::App& app, const GlobalOptions& global);
@@ -16,4 +16,4 @@ void add_sweep_command(CLI::App& app, const GlobalOptions& global);
 void add_convert_command(CLI::App& app, const GlobalOptions& global);
 void add_fuel_command(CLI::App& app, const GlobalOptions& global);
 
-}  // namespace stackbound::cases
+}  // namespace stackbound::cli

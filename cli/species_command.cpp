@@ -4,13 +4,15 @@
 
 #include <nlohmann/json.hpp>
 
-#include "stackbound/cases/commands.hpp"
+#include "stackbound/cli/commands.hpp"
 #include "stackbound/cases/species_file.hpp"
 #include "stackbound/units/constants.hpp"
 #include "stackbound/units/input_error.hpp"
 #include "stackbound/units/quantity_parser.hpp"
 
-namespace stackbound::cases {
+namespace stackbound::cli {
+
+using namespace stackbound::cases;
 
 namespace {
 
@@ -100,4 +102,4 @@ void add_species_command(CLI::App& app, const GlobalOptions& global) {
   command->callback([options, &global] { run(*options, global); });
 }
 
-}  // namespace stackbound::cases
+}  // namespace stackbound::cli

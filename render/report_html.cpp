@@ -1,10 +1,10 @@
 // One self-contained, print-friendly HTML page for a Report.
 #include <fmt/format.h>
 
-#include "stackbound/emissions/report.hpp"
-#include "stackbound/emissions/svg_plot.hpp"
+#include "stackbound/render/report_renderers.hpp"
+#include "stackbound/render/svg_plot.hpp"
 
-namespace stackbound::emissions {
+namespace stackbound::render {
 
 namespace {
 
@@ -71,4 +71,4 @@ std::string render_html(const Report& report) {
   return html;
 }
 
-}  // namespace stackbound::emissions
+}  // namespace stackbound::render

@@ -12,7 +12,7 @@
 
 #include <nlohmann/json.hpp>
 
-#include "stackbound/cases/commands.hpp"
+#include "stackbound/cli/commands.hpp"
 #include "stackbound/emissions/basis.hpp"
 #include "stackbound/emissions/cautions.hpp"
 #include "stackbound/emissions/concentration.hpp"
@@ -22,7 +22,8 @@
 #include "stackbound/units/normal_conditions.hpp"
 #include "stackbound/units/quantity_parser.hpp"
 
-namespace stackbound::cases {
+namespace stackbound::cli {
+
 
 namespace {
 
@@ -251,4 +252,4 @@ void add_convert_command(CLI::App& app, const GlobalOptions& /*global*/) {
   command->callback([options] { run(*options); });
 }
 
-}  // namespace stackbound::cases
+}  // namespace stackbound::cli

@@ -11,7 +11,7 @@
 
 #include "stackbound/core/species_database.hpp"
 
-namespace stackbound::cases {
+namespace stackbound::cli {
 
 // Options that every subcommand sees.
 struct GlobalOptions {
@@ -55,4 +55,4 @@ CLI::Option* add_format_option(CLI::App& command, std::string& format, const std
 // Splits "CO2,CO, O2" into trimmed names; empty items are an InputError naming the option.
 std::vector<std::string> split_list(std::string_view text, std::string_view option);
 
-}  // namespace stackbound::cases
+}  // namespace stackbound::cli

@@ -3,9 +3,9 @@
 
 #include <string>
 
-#include "stackbound/emissions/report.hpp"
+#include "stackbound/render/report_renderers.hpp"
 
-namespace stackbound::emissions {
+namespace stackbound::render {
 
 // Series with no finite points are listed in the legend as "(no data)". Returns an <svg> element.
 std::string render_svg_plot(const ReportPlot& plot, int width_px = 640, int height_px = 360);
@@ -13,4 +13,4 @@ std::string render_svg_plot(const ReportPlot& plot, int width_px = 640, int heig
 // Escapes &, <, >, " for HTML/SVG text.
 std::string escape_html(const std::string& text);
 
-}  // namespace stackbound::emissions
+}  // namespace stackbound::render

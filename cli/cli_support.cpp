@@ -1,4 +1,4 @@
-#include "stackbound/cases/cli_support.hpp"
+#include "stackbound/cli/cli_support.hpp"
 
 #include <filesystem>
 #include <iostream>
@@ -7,7 +7,7 @@
 
 #include "stackbound/units/input_error.hpp"
 
-namespace stackbound::cases {
+namespace stackbound::cli {
 
 OutputStream::OutputStream(const std::string& path) : path_(path), to_stdout_(path.empty() || path == "-") {
   if (to_stdout_) return;
@@ -76,4 +76,4 @@ std::vector<std::string> split_list(std::string_view text, std::string_view opti
   return items;
 }
 
-}  // namespace stackbound::cases
+}  // namespace stackbound::cli

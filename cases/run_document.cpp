@@ -1,4 +1,4 @@
-#include "stackbound/cases/run_report.hpp"
+#include "stackbound/cases/run_document.hpp"
 
 #include <fmt/format.h>
 
@@ -53,8 +53,8 @@ std::string ref_label(const RunResult& r) { return fmt::format("@ {} O2", em::pe
 
 }  // namespace
 
-em::Report run_report(const RunResult& r) {
-  em::Report report;
+Report run_document(const RunResult& r) {
+  Report report;
   report.title = r.definition.title;
   report.subtitle = fmt::format(
       "CO and NO figures are the {}: a screening estimate from chemical equilibrium, not a measurement and not a "
@@ -81,7 +81,7 @@ em::Report run_report(const RunResult& r) {
                              r.equilibrium.element_residual)},
   };
 
-  em::ReportTable bounds;
+  ReportTable bounds;
   bounds.title = fmt::format("Emissions: {}", kBoundStatement);
   const std::string ref = ref_label(r);
   bounds.columns = {"pollutant",
@@ -108,7 +108,7 @@ em::Report run_report(const RunResult& r) {
   report.tables.push_back(std::move(bounds));
 
   if (!r.limits.empty()) {
-    em::ReportTable limits;
+    ReportTable limits;
     limits.title = "Screening against the stated limits";
     limits.columns = {"pollutant", "stated limit", "bound on the limit's basis", "share of limit", "outcome"};
     for (const LimitScreening& l : r.limits) {
@@ -121,7 +121,7 @@ em::Report run_report(const RunResult& r) {
   }
 
   if (!r.measured.empty()) {
-    em::ReportTable measured;
+    ReportTable measured;
     measured.title = "Measured values beside the model";
     measured.columns = {"quantity", "as stated", "basis", "measured", "model / bound"};
     for (const MeasuredComparison& m : r.measured) {
@@ -136,7 +136,7 @@ em::Report run_report(const RunResult& r) {
     report.tables.push_back(std::move(measured));
   }
 
-  em::ReportTable flue;
+  ReportTable flue;
   flue.title = "Flue gas";
   flue.columns = {"species", "complete combustion, wet [%]", "complete combustion, dry [%]",
                   "equilibrium at firing, frozen, wet [%]"};
@@ -159,7 +159,7 @@ em::Report run_report(const RunResult& r) {
       r.combustion.f_factors.fc_scf_per_MMBtu())};
   report.tables.push_back(std::move(flue));
 
-  em::ReportTable species;
+  ReportTable species;
   species.title = fmt::format("Equilibrium composition at {:.1f} K and {:.4g} kPa", r.firing_temperature_K,
                               r.firing_pressure_Pa / 1e3);
   species.columns = {"species", "mole fraction", "[mol/kg fuel]"};
@@ -178,126 +178,6 @@ em::Report run_report(const RunResult& r) {
   report.assumptions = r.assumptions;
   report.cautions = r.cautions;
   return report;
-}
-
-nlohmann::json run_json(const RunResult& r) {
-  using nlohmann::json;
-  json mole_fractions = json::object();
-  json moles = json::object();
-  for (std::size_t i = 0; i < r.equilibrium.species.size(); ++i) {
-    mole_fractions[r.equilibrium.species[i]] = r.equilibrium.mole_fractions[i];
-    moles[r.equilibrium.species[i]] = r.equilibrium.moles[i];
-  }
-  json emissions = json::object();
-  for (const PollutantBound& p : r.pollutants) {
-    const em::StackEmission& e = p.emission;
-    emissions[p.name] = {
-        {"wet_mole_fraction", p.wet_mole_fraction},
-        {"ppmvd", e.ppmvd.value()},
-        {"ppmvd_at_ref_o2", e.ppmvd_at_reference.value()},
-        {"mg_per_Nm3_at_ref_o2", e.mg_per_Nm3_at_reference.result.value()},
-        {"kg_per_h", e.mass_rate.value() * kSecondsPerHour},
-        {"lb_per_h", e.mass_rate.value() * kSecondsPerHour / kKgPerLb},
-        {"t_per_yr", e.annual ? json(e.annual->value() / 1e3) : json(nullptr)},
-        {"lb_per_MMBtu", e.method19.lb_per_MMBtu()},
-        {"g_per_GJ", e.method19.g_per_GJ()},
-        {"lb_per_MMBtu_mass_balance", e.direct.lb_per_MMBtu()},
-        {"as_no2", e.ppmvd.pollutant().expressed_as_no2},
-    };
-  }
-  json limits = json::array();
-  for (const LimitScreening& l : r.limits) {
-    limits.push_back({{"pollutant", l.pollutant},
-                      {"limit", l.limit_text},
-                      {"value", l.result.value},
-                      {"limit_value", l.result.limit},
-                      {"unit", l.result.unit},
-                      {"basis", l.result.basis},
-                      {"margin", l.result.margin},
-                      {"fraction_of_limit", l.result.fraction_of_limit},
-                      {"outcome", em::screening_outcome_name(l.result.outcome)},
-                      {"wording", l.result.wording}});
-  }
-  json measured = json::array();
-  for (const MeasuredComparison& m : r.measured) {
-    measured.push_back({{"quantity", m.quantity},
-                        {"stated", m.measured_text},
-                        {"basis", m.basis},
-                        {"measured", m.measured},
-                        {"model", m.model},
-                        {"unit", m.unit},
-                        {"finding", m.finding.empty() ? json(nullptr) : json(m.finding)}});
-  }
-  json flue_wet = json::object();
-  json flue_dry = json::object();
-  for (const auto& [name, x] : r.combustion.flue.mole_fractions(core::GasBasis::wet)) flue_wet[name] = x;
-  for (const auto& [name, x] : r.combustion.flue.mole_fractions(core::GasBasis::dry)) flue_dry[name] = x;
-  const core::FuelFeed& feed = r.rates.feed;
-  return {
-      {"case", {{"title", r.definition.title}, {"description", r.definition.description}, {"file", r.definition.origin},
-                {"plant_type", r.definition.plant_type}}},
-      {"bound_statement", kBoundStatement},
-      {"fuel",
-       {{"name", r.fuel.name()},
-        {"source", r.fuel.source()},
-        {"heating_value_method", r.fuel.heating_value_method()},
-        {"hhv_MJ_per_kg", r.combustion.hhv_J_per_kg / 1e6},
-        {"lhv_MJ_per_kg", r.combustion.lhv_J_per_kg / 1e6},
-        {"feed_rate", feed.given},
-        {"mass_flow_kg_per_h", feed.mass_flow_kg_per_s * kSecondsPerHour},
-        {"heat_input_hhv_MW", feed.heat_input_hhv_W / 1e6},
-        {"Fd_dscf_per_MMBtu", r.combustion.f_factors.fd_dscf_per_MMBtu()},
-        {"Fw_wscf_per_MMBtu", r.combustion.f_factors.fw_wscf_per_MMBtu()},
-        {"Fc_scf_per_MMBtu", r.combustion.f_factors.fc_scf_per_MMBtu()}}},
-      {"combustion",
-       {{"air_ratio", r.combustion.air_ratio},
-        {"excess_air_percent", r.combustion.excess_air() * 100.0},
-        {"stoichiometric_air_kg_per_kg", r.combustion.stoichiometric_air_kg_per_kg},
-        {"flue_gas_wet", flue_wet},
-        {"flue_gas_dry", flue_dry},
-        {"water_dew_point_K", r.combustion.water_dew_point_K ? json(*r.combustion.water_dew_point_K) : json(nullptr)}}},
-      {"firing",
-       {{"temperature_K", r.firing_temperature_K},
-        {"pressure_Pa", r.firing_pressure_Pa},
-        {"adiabatic", r.definition.firing.adiabatic},
-        {"heat_loss_fraction", r.definition.firing.heat_loss_fraction}}},
-      {"equilibrium",
-       {{"mole_fractions", mole_fractions},
-        {"moles_per_kg_fuel", moles},
-        {"total_gas_moles_per_kg_fuel", r.equilibrium.total_gas_moles},
-        {"iterations", r.equilibrium.iterations},
-        {"element_residual", r.equilibrium.element_residual},
-        {"graphite_present", r.equilibrium.graphite_present}}},
-      {"stack",
-       {{"temperature_K", r.definition.stack.temperature_K},
-        {"pressure_Pa", r.definition.stack.pressure_Pa},
-        {"o2_dry_percent", r.stack_o2_dry * 100.0},
-        {"moisture_percent", r.stack_h2o_wet * 100.0},
-        {"wet_flow_mol_per_s", r.stack_wet_mol_per_s},
-        {"wet_flow_Nm3_per_h", normal_m3_per_h(r.stack_wet_mol_per_s, *r.normal)},
-        {"dry_flow_Nm3_per_h", normal_m3_per_h(r.stack_dry_mol_per_s, *r.normal)},
-        {"actual_flow_m3_per_h", r.stack_actual_m3_per_s * kSecondsPerHour}}},
-      {"reference_o2_percent", r.reference_o2_dry * 100.0},
-      {"reference_o2", {{"text", r.reference_o2_text}, {"from_preset", r.reference_o2_from_preset}}},
-      {"o2_basis_percent", r.definition.report.o2_basis_percent},
-      {"normal_conditions", {{"key", r.normal->key}, {"description", r.normal->description}}},
-      {"emissions", emissions},
-      {"limits", limits},
-      {"measured", measured},
-      {"findings", r.findings},
-      {"warnings", r.warnings},
-      {"assumptions", r.assumptions},
-      {"cautions", r.cautions},
-      {"caution_keys", r.caution_keys},
-  };
-}
-
-std::string render_run(const RunResult& result, const std::string& format) {
-  if (format == "json") return run_json(result).dump(2) + "\n";
-  const em::Report report = run_report(result);
-  if (format == "csv") return em::render_csv(report);
-  if (format == "html") return em::render_html(report);
-  return em::render_text(report);
 }
 
 }  // namespace stackbound::cases

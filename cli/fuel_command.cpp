@@ -12,7 +12,7 @@
 
 #include <nlohmann/json.hpp>
 
-#include "stackbound/cases/commands.hpp"
+#include "stackbound/cli/commands.hpp"
 #include "stackbound/cases/fuel_file.hpp"
 #include "stackbound/cases/species_file.hpp"
 #include "stackbound/core/combustion.hpp"
@@ -23,7 +23,9 @@
 #include "stackbound/units/normal_conditions.hpp"
 #include "stackbound/units/quantity_parser.hpp"
 
-namespace stackbound::cases {
+namespace stackbound::cli {
+
+using namespace stackbound::cases;
 
 namespace {
 
@@ -571,4 +573,4 @@ void add_fuel_command(CLI::App& app, const GlobalOptions& global) {
   command->callback([o, &global] { run(*o, global); });
 }
 
-}  // namespace stackbound::cases
+}  // namespace stackbound::cli

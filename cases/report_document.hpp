@@ -1,13 +1,13 @@
 #pragma once
-// The report document: what every front end (run, compare, sweep) fills in and every renderer prints.
-// A renderer turns it into aligned text, CSV, or one self-contained HTML file; JSON is built from the
-// structured results by the caller, with its own stable keys.
+// The report document: the last stage of a run (and of a comparison) fills it in; the renderers in
+// render/ print it as aligned text, CSV or one self-contained HTML file. JSON is built from the
+// structured results instead, with its own stable keys (render/run_json.hpp).
 
 #include <string>
 #include <utility>
 #include <vector>
 
-namespace stackbound::emissions {
+namespace stackbound::cases {
 
 // A table whose column titles carry their units, e.g. "CO bound [ppmvd @ 3 % O2]".
 struct ReportTable {
@@ -42,15 +42,4 @@ struct Report {
   std::vector<std::string> cautions;
 };
 
-// Aligned terminal text: summary as "label: value", tables with aligned columns.
-std::string render_text(const Report& report);
-
-// CSV (RFC 4180 quoting): one block per table, a title line, a header line, the rows; summary,
-// flags and cautions as "#"-prefixed comment lines at the top.
-std::string render_csv(const Report& report);
-
-// One self-contained, print-friendly HTML page (inline CSS, inline SVG plots, no scripts, no
-// external resources).
-std::string render_html(const Report& report);
-
-}  // namespace stackbound::emissions
+}  // namespace stackbound::cases

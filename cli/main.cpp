@@ -5,11 +5,11 @@
 
 #include <CLI/CLI.hpp>
 
-#include "stackbound/cases/commands.hpp"
+#include "stackbound/cli/commands.hpp"
 #include "stackbound/units/input_error.hpp"
 
 int main(int argc, char** argv) {
-  namespace sb = stackbound::cases;
+  namespace sb = stackbound::cli;
   CLI::App app{"stackbound - equilibrium-based emissions and stack-gas estimator.\n"
                "Results are equilibrium bounds at stated firing conditions, not measurements;\n"
                "permits, regulators, local codes and licensed practice govern."};

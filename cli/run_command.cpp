@@ -1,12 +1,14 @@
 // `stackbound run CASE.yaml [--format text|json|csv|html] [--output FILE]`: the main job.
 
 #include "stackbound/cases/case_file.hpp"
-#include "stackbound/cases/commands.hpp"
-#include "stackbound/cases/run_report.hpp"
 #include "stackbound/cases/runner.hpp"
 #include "stackbound/cases/species_file.hpp"
+#include "stackbound/cli/commands.hpp"
+#include "stackbound/render/run_output.hpp"
 
-namespace stackbound::cases {
+namespace stackbound::cli {
+
+using namespace stackbound::cases;
 
 namespace {
 
@@ -35,8 +37,8 @@ void add_run_command(CLI::App& app, const GlobalOptions& global) {
     const CaseDefinition definition = load_case(options->case_file);
     const core::SpeciesDatabase database = species_database(global.species_file);
     const RunResult result = run_case(definition, database);
-    write_output(options->output, render_run(result, options->format));
+    write_output(options->output, render::render_run(result, options->format));
   });
 }
 
-}  // namespace stackbound::cases
+}  // namespace stackbound::cli

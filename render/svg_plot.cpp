@@ -1,4 +1,4 @@
-#include "stackbound/emissions/svg_plot.hpp"
+#include "stackbound/render/svg_plot.hpp"
 
 #include <algorithm>
 #include <array>
@@ -7,7 +7,7 @@
 
 #include <fmt/format.h>
 
-namespace stackbound::emissions {
+namespace stackbound::render {
 
 namespace {
 
@@ -141,4 +141,4 @@ std::string render_svg_plot(const ReportPlot& plot, int width_px, int height_px)
   return svg;
 }
 
-}  // namespace stackbound::emissions
+}  // namespace stackbound::render

@@ -9,7 +9,7 @@
 #include <nlohmann/json.hpp>
 #include <numeric>
 
-#include "stackbound/cases/commands.hpp"
+#include "stackbound/cli/commands.hpp"
 #include "stackbound/cases/species_file.hpp"
 #include "stackbound/core/adiabatic_flame.hpp"
 #include "stackbound/core/element_amounts.hpp"
@@ -18,7 +18,9 @@
 #include "stackbound/units/input_error.hpp"
 #include "stackbound/units/quantity_parser.hpp"
 
-namespace stackbound::cases {
+namespace stackbound::cli {
+
+using namespace stackbound::cases;
 
 namespace {
 
@@ -260,4 +262,4 @@ void add_equilibrium_command(CLI::App& app, const GlobalOptions& global) {
   command->callback([options, &global] { run(*options, global); });
 }
 
-}  // namespace stackbound::cases
+}  // namespace stackbound::cli

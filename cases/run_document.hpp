@@ -1,0 +1,14 @@
+#pragma once
+// The last stage of a run: its result as a report document (rendered by render/).
+
+#include "stackbound/cases/report_document.hpp"
+#include "stackbound/cases/runner.hpp"
+
+namespace stackbound::cases {
+
+// The wording every output of a run carries for the CO and NO figures.
+inline constexpr const char* kBoundStatement = "equilibrium bound at the stated firing conditions";
+
+Report run_document(const RunResult& result);
+
+}  // namespace stackbound::cases

@@ -1,0 +1,24 @@
+#include "stackbound/cli/progress_bar.hpp"
+
+#include <unistd.h>
+
+#include <algorithm>
+#include <cstdio>
+#include <string>
+
+namespace stackbound::cli {
+
+ProgressBar::ProgressBar() : shown_(::isatty(::fileno(stderr)) != 0) {}
+
+void ProgressBar::update(std::size_t done, std::size_t total) const {
+  if (!shown_) return;
+  constexpr int kWidth = 40;
+  const int filled = static_cast<int>(kWidth * done / std::max<std::size_t>(total, 1));
+  std::fprintf(stderr, "\r[%s%s] %3d %% %zu/%zu points", std::string(static_cast<std::size_t>(filled), '#').c_str(),
+               std::string(static_cast<std::size_t>(kWidth - filled), ' ').c_str(),
+               static_cast<int>(100 * done / std::max<std::size_t>(total, 1)), done, total);
+  if (done == total) std::fprintf(stderr, "\n");
+  std::fflush(stderr);
+}
+
+}  // namespace stackbound::cli

@@ -1,0 +1,34 @@
+#include "stackbound/render/comparison_json.hpp"
+
+#include "stackbound/cases/run_document.hpp"
+
+namespace stackbound::render {
+
+using namespace stackbound::cases;
+
+nlohmann::json comparison_json(const Comparison& c) {
+  nlohmann::json cases = nlohmann::json::array();
+  for (std::size_t i = 0; i < c.runs.size(); ++i) {
+    nlohmann::json values = nlohmann::json::object();
+    nlohmann::json differences = nlohmann::json::object();
+    for (std::size_t k = 0; k < c.columns.size(); ++k) {
+      const double value = c.values[i][k];
+      const double first = c.values[0][k];
+      values[c.columns[k].key] = value;
+      const auto rel = relative_difference(value, first);
+      differences[c.columns[k].key] = {{"absolute", value - first}, {"relative", rel ? nlohmann::json(*rel) : nlohmann::json(nullptr)}};
+    }
+    cases.push_back({{"label", std::string(1, static_cast<char>('A' + i))},
+                     {"file", c.runs[i].definition.origin},
+                     {"title", c.runs[i].definition.title},
+                     {"values", values},
+                     {"difference_from_first", differences},
+                     {"findings", c.runs[i].findings}});
+  }
+  nlohmann::json units = nlohmann::json::object();
+  for (const MetricColumn& column : c.columns) units[column.key] = column.header;
+  return {{"bound_statement", kBoundStatement}, {"cases", cases},      {"columns", units},
+          {"flags", c.flags},                    {"cautions", c.runs.front().cautions}};
+}
+
+}  // namespace stackbound::render

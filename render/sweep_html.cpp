@@ -1,0 +1,108 @@
+#include "stackbound/render/sweep_html.hpp"
+
+#include <cmath>
+
+#include <fmt/format.h>
+
+#include "stackbound/cases/run_document.hpp"
+#include "stackbound/emissions/cautions.hpp"
+#include "stackbound/emissions/reference_correction.hpp"
+
+namespace stackbound::render {
+
+using namespace stackbound::cases;
+
+void SweepHtmlCollector::add(const SweepPoint& point) {
+  Row row{point.values, {}, point.error};
+  if (point.result) {
+    if (columns_.empty()) {
+      columns_ = run_metric_columns(*point.result);
+      reference_o2_ = emissions::percent_text(point.result->reference_o2_dry) + " % O2";
+    }
+    const std::vector<double> values = run_metric_values(*point.result);
+    for (std::size_t k = 0; k < values.size() && k < columns_.size(); ++k) row.metrics[columns_[k].key] = values[k];
+  } else {
+    ++failed_;
+  }
+  rows_.push_back(std::move(row));
+}
+
+Report SweepHtmlCollector::document(const CaseDefinition& definition) const {
+  Report report;
+  report.title = "Sweep: " + definition.title;
+  report.subtitle = fmt::format("CO and NO figures are the {} of each point: screening estimates from chemical "
+                                "equilibrium, not measurements and not compliance determinations.",
+                                kBoundStatement);
+  report.summary.emplace_back("Case file", definition.origin);
+  for (const VarySpec& v : vary_) report.summary.emplace_back("Varied", v.text);
+  report.summary.emplace_back("Points", fmt::format("{} ({} failed)", rows_.size(), failed_));
+  const std::string x_label = sweep_parameter_label(vary_.front().parameter);
+  const auto plot = [&](const std::string& title, const std::string& y_label, const std::string& key) {
+    return ReportPlot{title, x_label, y_label, series_for(key)};
+  };
+  report.plots.push_back(plot(fmt::format("CO bound at {}", reference_o2_), fmt::format("CO [ppmvd @ {}]", reference_o2_),
+                              "CO_ppmvd_at_ref_o2"));
+  report.plots.push_back(plot(fmt::format("NO bound at {}", reference_o2_), fmt::format("NO [ppmvd @ {}]", reference_o2_),
+                              "NO_ppmvd_at_ref_o2"));
+  report.plots.push_back(plot("Firing (flame) temperature", "temperature [K]", "firing_temperature_K"));
+  report.plots.push_back(plot("Flue-gas O2", "O2 [% dry]", "flue_o2_dry_percent"));
+  report.tables.push_back(points_table());
+  if (failed_ > 0) report.flags.push_back(fmt::format("{} points failed; their rows say why.", failed_));
+  for (const emissions::Caution c : emissions::standard_cautions()) report.cautions.emplace_back(emissions::caution(c).text);
+  return report;
+}
+
+ReportTable SweepHtmlCollector::points_table() const {
+  ReportTable table;
+  table.title = "Points";
+  table.columns.push_back("point");
+  for (const VarySpec& v : vary_) table.columns.push_back(sweep_parameter_label(v.parameter));
+  for (const MetricColumn& column : columns_) table.columns.push_back(column.header);
+  table.columns.push_back("error");
+  for (std::size_t i = 0; i < rows_.size() && i < kSweepHtmlMaxTableRows; ++i) {
+    std::vector<std::string> cells{std::to_string(i + 1)};
+    for (std::size_t k = 0; k < vary_.size(); ++k) {
+      cells.push_back(fmt::format("{:.6g}", sweep_parameter_display(vary_[k].parameter, rows_[i].values[k])));
+    }
+    for (const MetricColumn& column : columns_) {
+      const auto found = rows_[i].metrics.find(column.key);
+      cells.push_back(found == rows_[i].metrics.end() ? "-" : fmt::format("{:.5g}", found->second));
+    }
+    cells.push_back(rows_[i].error);
+    table.rows.push_back(std::move(cells));
+  }
+  if (rows_.size() > kSweepHtmlMaxTableRows) {
+    table.notes.push_back(
+        fmt::format("First {} of {} points shown; use --format csv for all.", kSweepHtmlMaxTableRows, rows_.size()));
+  }
+  return table;
+}
+
+// One series per combination of the parameters after the first (at most 6 lines a plot).
+std::vector<PlotSeries> SweepHtmlCollector::series_for(const std::string& key) const {
+  std::map<std::vector<double>, PlotSeries> by_rest;
+  for (const Row& row : rows_) {
+    const std::vector<double> rest(row.values.begin() + 1, row.values.end());
+    auto [it, inserted] = by_rest.try_emplace(rest);
+    if (inserted) {
+      std::string name = key.substr(0, key.find('_'));
+      for (std::size_t k = 1; k < vary_.size(); ++k) {
+        name += fmt::format(", {} = {:.4g} {}", sweep_parameter_name(vary_[k].parameter),
+                            sweep_parameter_display(vary_[k].parameter, row.values[k]),
+                            sweep_parameter_unit(vary_[k].parameter));
+      }
+      it->second.name = name;
+    }
+    const auto found = row.metrics.find(key);
+    it->second.x.push_back(sweep_parameter_display(vary_.front().parameter, row.values.front()));
+    it->second.y.push_back(found == row.metrics.end() ? std::nan("") : found->second);
+  }
+  std::vector<PlotSeries> series;
+  for (auto& [rest, s] : by_rest) {
+    if (series.size() == 6) break;
+    series.push_back(std::move(s));
+  }
+  return series;
+}
+
+}  // namespace stackbound::render
