@@ -2,6 +2,8 @@
 
 #include <exception>
 #include <iostream>
+#include <string>
+#include <vector>
 
 #include <CLI/CLI.hpp>
 
@@ -27,8 +29,30 @@ int main(int argc, char** argv) {
   sb::add_fuel_command(app, global);
   try {
     app.parse(argc, argv);
+    sb::finish_standard_output();
+  } catch (const CLI::CallForHelp& help) {
+    return app.exit(help);
+  } catch (const CLI::CallForAllHelp& help) {
+    return app.exit(help);
+  } catch (const CLI::RequiredError& error) {
+    // With no known command given, CLI11 says only "A subcommand is required": name what was typed.
+    const std::vector<std::string> rest = app.remaining();
+    if (app.get_subcommands().empty() && !rest.empty()) {
+      std::string commands;
+      for (const CLI::App* command : app.get_subcommands([](const CLI::App*) { return true; })) {
+        commands += (commands.empty() ? "" : ", ") + command->get_name();
+      }
+      std::cerr << "stackbound: error: unknown command \"" << rest.front() << "\"; the commands are " << commands
+                << " (stackbound --help)\n";
+      return 2;
+    }
+    app.exit(error);
+    return 2;
   } catch (const CLI::ParseError& error) {
-    return app.exit(error);
+    // Every command-line mistake (unknown command or option, a missing or malformed value) exits 2,
+    // like any other input error; CLI11's message names what was wrong.
+    app.exit(error);
+    return 2;
   } catch (const sb::PartialFailure& error) {
     std::cerr << "stackbound: " << error.what() << '\n';
     return 4;
