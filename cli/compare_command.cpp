@@ -3,6 +3,7 @@
 
 #include "stackbound/cases/comparison.hpp"
 #include "stackbound/cases/species_file.hpp"
+#include "stackbound/render/finite_figures.hpp"
 #include "stackbound/cli/commands.hpp"
 #include "stackbound/render/comparison_json.hpp"
 #include "stackbound/render/report_renderers.hpp"
@@ -36,7 +37,7 @@ void add_compare_command(CLI::App& app, const GlobalOptions& global) {
     const core::SpeciesDatabase database = species_database(global.species_file);
     const Comparison comparison = compare(cli->case_files, database);
     write_output(cli->output, cli->format == "json"
-                                  ? render::comparison_json(comparison).dump(2) + "\n"
+                                  ? render::json_text(render::comparison_json(comparison))
                                   : render::render_report(cases::comparison_document(comparison), cli->format));
   });
 }

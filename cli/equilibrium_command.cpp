@@ -9,6 +9,7 @@
 #include <nlohmann/json.hpp>
 #include <numeric>
 
+#include "stackbound/render/finite_figures.hpp"
 #include "stackbound/cli/commands.hpp"
 #include "stackbound/cases/species_file.hpp"
 #include "stackbound/core/adiabatic_flame.hpp"
@@ -222,7 +223,7 @@ void run(const EquilibriumOptions& options, const GlobalOptions& global) {
     rethrow_as_option(error);
   }
   const std::string content = options.format == "json"
-                                  ? json_report(result, feed, options, feed_temperature_K).dump(2) + "\n"
+                                  ? render::json_text(json_report(result, feed, options, feed_temperature_K))
                                   : text_report(database, result, feed, options, feed_temperature_K);
   write_output(options.output, content);
 }

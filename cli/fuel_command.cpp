@@ -12,6 +12,7 @@
 
 #include <nlohmann/json.hpp>
 
+#include "stackbound/render/finite_figures.hpp"
 #include "stackbound/cli/commands.hpp"
 #include "stackbound/cases/fuel_file.hpp"
 #include "stackbound/cases/species_file.hpp"
@@ -472,7 +473,7 @@ std::string presets_listing(std::string_view format) {
     for (const core::FuelPreset& p : core::fuel_presets()) {
       list.push_back({{"key", p.key}, {"description", p.description}, {"source", p.source}});
     }
-    return list.dump(2) + "\n";
+    return render::json_text(list);
   }
   std::string text = "Fuel presets (typical values for their class, not the analysis of any fuel lot):\n";
   for (const core::FuelPreset& p : core::fuel_presets()) {
@@ -499,7 +500,7 @@ void run(const FuelOptions& o, const GlobalOptions& global) {
   } else if (input.file_rate) {
     rates = core::rates(result, core::resolve_feed(fuel, *input.file_rate, basis, "fuel.feed_rate"));
   }
-  write_output(o.output, o.format == "json" ? json_report(o, fuel, oxidant, result, rates).dump(2) + "\n"
+  write_output(o.output, o.format == "json" ? render::json_text(json_report(o, fuel, oxidant, result, rates))
                                             : text_report(o, fuel, oxidant, result, rates));
 }
 

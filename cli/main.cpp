@@ -8,6 +8,7 @@
 #include <CLI/CLI.hpp>
 
 #include "stackbound/cli/commands.hpp"
+#include "stackbound/core/equilibrium.hpp"
 #include "stackbound/units/input_error.hpp"
 
 int main(int argc, char** argv) {
@@ -59,8 +60,15 @@ int main(int argc, char** argv) {
   } catch (const stackbound::units::InputError& error) {
     std::cerr << "stackbound: error: " << error.what() << '\n';
     return 2;
+  } catch (const stackbound::core::ConvergenceError& error) {
+    std::cerr << "stackbound: the equilibrium did not converge: " << error.what() << '\n';
+    return 5;
   } catch (const std::exception& error) {
-    std::cerr << "stackbound: failed: " << error.what() << '\n';
+    // Anything else is a defect of the tool, never of the input: inputs are checked at load and
+    // library exceptions are turned into located input errors there.
+    std::cerr << "stackbound: internal error: " << error.what()
+              << "\nThis is a defect of stackbound, not a problem with your input; nothing was written. "
+                 "Please report it with the command line and input files.\n";
     return 3;
   }
   return 0;

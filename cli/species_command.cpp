@@ -4,6 +4,7 @@
 
 #include <nlohmann/json.hpp>
 
+#include "stackbound/render/finite_figures.hpp"
 #include "stackbound/cli/commands.hpp"
 #include "stackbound/cases/species_file.hpp"
 #include "stackbound/units/constants.hpp"
@@ -55,7 +56,8 @@ void run(const SpeciesOptions& options, const GlobalOptions& global) {
     if (!options.temperature.empty()) {
       throw units::InputError("--temperature needs a species NAME, e.g. stackbound species CO2 --temperature 1500K");
     }
-    write_output(options.output, options.format == "json" ? species_list_json(database).dump(2) + "\n" : species_table(database));
+    write_output(options.output,
+                 options.format == "json" ? render::json_text(species_list_json(database)) : species_table(database));
     return;
   }
   const core::Species& species = database.at(options.name, "NAME");
@@ -75,7 +77,7 @@ void run(const SpeciesOptions& options, const GlobalOptions& global) {
                                 {"pressure_Pa", units::kStandardStatePressure_Pa},
                                 {"molar_mass_g_per_mol", species.molar_mass_kg_per_mol() * 1e3},
                                 {"source", species.source()}};
-    write_output(options.output, out.dump(2) + "\n");
+    write_output(options.output, render::json_text(out));
     return;
   }
   write_output(options.output, fmt::format("{} at {:.2f} K, standard state (1 bar), source {}\n"

@@ -51,7 +51,7 @@ void run(const SweepCli& cli, const GlobalOptions& global) {
   } else {
     render::SweepHtmlCollector collector(vary);
     failed = run_sweep(definition, vary, database, [&](const SweepPoint& p) { collector.add(p); }, options);
-    out.write(render::render_html(collector.document(definition)));
+    out.write(render::render_report(collector.document(definition), "html"));
   }
   out.commit();
   if (failed > 0) {

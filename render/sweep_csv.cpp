@@ -2,6 +2,7 @@
 
 #include <array>
 #include <charconv>
+#include <cmath>
 #include <iterator>
 #include <string>
 
@@ -9,6 +10,7 @@
 
 #include "stackbound/cases/run_document.hpp"
 #include "stackbound/cases/run_metrics.hpp"
+#include "stackbound/render/finite_figures.hpp"
 #include "stackbound/emissions/cautions.hpp"
 #include "stackbound/render/csv_cell.hpp"
 
@@ -66,7 +68,12 @@ void SweepCsvWriter::write_row(const SweepPoint& point) {
   }
   if (point.result) {
     fmt::format_to(std::back_inserter(line), ",ok");
-    for (const double value : run_metric_values(*point.result)) {
+    const std::vector<double> values = run_metric_values(*point.result);
+    for (std::size_t m = 0; m < values.size(); ++m) {
+      const double value = values[m];
+      if (!std::isfinite(value)) {
+        throw NonFiniteFigure(fmt::format("sweep point {}: figure {} of the row is not finite", point.index + 1, m + 1));
+      }
       // to_chars: the same 8 significant digits as "{:.8g}", at a fraction of the cost per row.
       std::array<char, 32> digits{};
       const auto end = std::to_chars(digits.data(), digits.data() + digits.size(), value, std::chars_format::general, 8).ptr;
