@@ -1,7 +1,11 @@
 #include "stackbound/cases/fuel_spec.hpp"
 
 #include <fmt/format.h>
+#include <fmt/ranges.h>
 
+#include <algorithm>
+
+#include "stackbound/core/composition_notation.hpp"
 #include "stackbound/core/fuel_presets.hpp"
 #include "stackbound/units/input_error.hpp"
 
@@ -10,6 +14,44 @@ namespace stackbound::cases {
 namespace {
 
 using units::Dimension;
+
+// A composition written as one text ("CH4 93 %, C2H6 4 %", the command line's notation, or the former
+// "CH4=93, C2H6=4") is refused with the mapping to write instead: in a file, compositions are YAML
+// mappings.
+void refuse_text_composition(const YamlField& node, std::string_view example) {
+  if (!node.is_scalar()) return;
+  const std::string text = node.text();
+  std::vector<std::string> entries;
+  std::size_t start = 0;
+  while (start <= text.size() && !text.empty()) {
+    const std::size_t end = std::min(text.find(',', start), text.size());
+    const std::string item = text.substr(start, end - start);
+    start = end + 1;
+    std::string entry;
+    if (const std::size_t equals = item.find('='); equals != std::string::npos) {
+      const auto trim = [](std::string s) {
+        s.erase(0, std::min(s.find_first_not_of(" \t"), s.size()));
+        s.erase(std::min(s.find_last_not_of(" \t%") + 1, s.size()));
+        return s;
+      };
+      const std::string name = trim(item.substr(0, equals));
+      const std::string value = trim(item.substr(equals + 1));
+      if (!name.empty() && !value.empty()) entry = fmt::format("{}: {} %", name, value);
+    } else {
+      try {
+        for (const auto& [name, percent] : core::parse_analysis(item, node.path())) {
+          entry = fmt::format("{}: {} %", name, percent);
+        }
+      } catch (const units::InputError&) {
+        entry.clear();
+      }
+    }
+    if (entry.empty()) node.fail(fmt::format("expected a mapping of percentages, e.g. {}", example));
+    entries.push_back(entry);
+  }
+  if (entries.empty()) node.fail(fmt::format("expected a mapping of percentages, e.g. {}", example));
+  node.fail(fmt::format("a composition in a file is a YAML mapping: write {{{}}}", fmt::join(entries, ", ")));
+}
 
 std::vector<GasComponent> percentages(const YamlField& mapping) {
   std::vector<GasComponent> items;
@@ -44,9 +86,11 @@ FuelSpec read_fuel_spec(const YamlField& fuel, bool blend_part) {
   if (kind == "preset") {
     spec.preset = kind_node.text();
   } else if (kind == "gas") {
+    refuse_text_composition(kind_node, "{CH4: 93 %, C2H6: 4 %, CO2: 1 %, N2: 2 %}");
     spec.gas = percentages(kind_node);
     if (const auto basis = fuel.optional("gas_basis")) spec.gas_basis = basis->choice({"mole", "mass"});
   } else if (kind == "ultimate") {
+    refuse_text_composition(kind_node, "{C: 75 %, H: 5 %, O: 6.7 %, N: 1.5 %, S: 2.3 %, ash: 9.5 %, moisture: 8 %}");
     kind_node.allow_only({"C", "H", "O", "N", "S", "ash", "moisture"});
     spec.ultimate = percentages(kind_node);
     if (const auto basis = fuel.optional("ultimate_basis")) {

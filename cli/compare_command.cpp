@@ -27,7 +27,7 @@ void add_compare_command(CLI::App& app, const GlobalOptions& global) {
   CLI::App* command = app.add_subcommand("compare", "Compare two or more cases side by side");
   command->footer(
       "Examples:\n"
-      "  stackbound compare cases/examples/gas_boiler.yaml cases/examples/oil_heater.yaml\n"
+      "  stackbound compare cases/examples/gas_boiler.yaml cases/examples/wood_chip_boiler.yaml\n"
       "  stackbound compare base.yaml low_excess_air.yaml --format html --output compare.html\n"
       "Differences are against the first case: absolute, and relative in %.");
   command->add_option("CASES", cli->case_files, "Two or more case files (YAML)")->required()->expected(2, 26);

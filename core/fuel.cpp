@@ -2,7 +2,6 @@
 
 #include <algorithm>
 #include <cassert>
-#include <charconv>
 #include <cmath>
 #include <numeric>
 
@@ -77,7 +76,7 @@ double normalising_factor(double sum, const std::string& field, std::string_view
   if (!(sum > 0.0)) throw units::InputError(fmt::format("{}: the {} sum to 0 %; give percentages adding up to 100 %", field, what));
   const double difference = sum - 100.0;
   if (std::abs(difference) > kSumTolerance_percent) {
-    std::string hint = std::abs(sum - 1.0) < 0.05 ? "; they look like fractions: give percent (e.g. CH4=93, not 0.93)"
+    std::string hint = std::abs(sum - 1.0) < 0.05 ? "; they look like fractions: give percent (e.g. 93 %, not 0.93)"
                                                   : "; check for a missing or mistyped component";
     throw units::InputError(fmt::format("{}: the {} sum to {:.6g} %, which is more than {} percentage point from 100 %{}",
                                         field, what, sum, kSumTolerance_percent, hint));
@@ -136,7 +135,7 @@ std::string_view correlation_citation(HeatingValueCorrelation correlation) {
 Fuel Fuel::gas(const GasFuelSpec& spec, const SpeciesDatabase& database) {
   assert(element_indices_are_consistent() && "ElementMoles indices must follow known_elements()");
   if (spec.composition_percent.empty()) {
-    throw units::InputError(fmt::format("{}: empty composition; give species percentages, e.g. \"CH4=95, C2H6=3, N2=2\"",
+    throw units::InputError(fmt::format("{}: empty composition; give at least one species with its percentage",
                                         spec.field));
   }
   Fuel fuel;
@@ -533,42 +532,6 @@ double Fuel::enthalpy_J_per_kg(double temperature_K, const SpeciesDatabase& data
   h += condensed_formation_J_per_kg_;
   if (specific_heat_known_) h += condensed_heat_capacity_J_per_kg_K_ * (temperature_K - kT0_K);
   return h;
-}
-
-// ---------------------------------------------------------------------------------------------------
-
-std::vector<std::pair<std::string, double>> parse_composition(std::string_view text, std::string_view field) {
-  std::vector<std::pair<std::string, double>> items;
-  const auto trim = [](std::string_view s) {
-    const auto first = s.find_first_not_of(" \t");
-    if (first == std::string_view::npos) return std::string_view{};
-    return s.substr(first, s.find_last_not_of(" \t") - first + 1);
-  };
-  std::size_t start = 0;
-  while (start <= text.size()) {
-    const std::size_t comma = std::min(text.find(',', start), text.size());
-    const std::string_view item = trim(text.substr(start, comma - start));
-    const std::size_t equals = item.find('=');
-    if (item.empty() || equals == std::string_view::npos) {
-      throw units::InputError(fmt::format("{} = \"{}\": item \"{}\" is not SPECIES=PERCENT (e.g. \"CH4=93, C2H6=4\")",
-                                          field, text, item));
-    }
-    const std::string_view name = trim(item.substr(0, equals));
-    std::string_view number = trim(item.substr(equals + 1));
-    if (!number.empty() && number.back() == '%') number = trim(number.substr(0, number.size() - 1));
-    if (!number.empty() && number.front() == '+') number.remove_prefix(1);
-    double value = 0.0;
-    const auto [end, error] = std::from_chars(number.data(), number.data() + number.size(), value);
-    if (name.empty() || number.empty() || error != std::errc() || end != number.data() + number.size() ||
-        !std::isfinite(value)) {
-      throw units::InputError(fmt::format("{} = \"{}\": item \"{}\" is not SPECIES=PERCENT with a number (e.g. "
-                                          "\"CH4=93\")",
-                                          field, text, item));
-    }
-    items.emplace_back(std::string(name), value);
-    start = comma + 1;
-  }
-  return items;
 }
 
 }  // namespace stackbound::core
