@@ -1,12 +1,11 @@
 #include "stackbound/cases/case_file.hpp"
 
 #include <cmath>
-#include <fstream>
-#include <sstream>
 
 #include <fmt/format.h>
 
 #include "stackbound/cases/fuel_spec.hpp"
+#include "stackbound/cases/input_file.hpp"
 #include "stackbound/cases/yaml_reader.hpp"
 #include "stackbound/units/input_error.hpp"
 
@@ -201,11 +200,7 @@ CaseDefinition parse_case(std::string_view text, const std::string& origin) {
 }
 
 CaseDefinition load_case(const std::string& path) {
-  std::ifstream in(path);
-  if (!in) throw units::InputError(fmt::format("CASE = \"{}\": cannot open the case file", path));
-  std::ostringstream text;
-  text << in.rdbuf();
-  return parse_case(text.str(), path);
+  return parse_case(read_input_file(path, "CASE", "case file"), path);
 }
 
 }  // namespace stackbound::cases

@@ -1,12 +1,11 @@
 #include "stackbound/cases/fuel_file.hpp"
 
-#include <fstream>
-#include <sstream>
 #include <vector>
 
 #include <fmt/format.h>
 
 #include "stackbound/cases/fuel_spec.hpp"
+#include "stackbound/cases/input_file.hpp"
 #include "stackbound/units/input_error.hpp"
 
 namespace stackbound::cases {
@@ -34,11 +33,7 @@ FuelFile parse_fuel_file(std::string_view text, const std::string& origin, const
 }
 
 FuelFile read_fuel_file(const std::string& path, const core::SpeciesDatabase& database) {
-  std::ifstream in(path);
-  if (!in) throw units::InputError(fmt::format("FILE = \"{}\": cannot open the fuel file", path));
-  std::ostringstream text;
-  text << in.rdbuf();
-  return parse_fuel_file(text.str(), path, database);
+  return parse_fuel_file(read_input_file(path, "FILE", "fuel file"), path, database);
 }
 
 }  // namespace stackbound::cases

@@ -18,20 +18,41 @@ using namespace stackbound::cases;
 
 namespace {
 
+constexpr std::size_t kDefaultMaxSweepPoints = 10'000'000;
+
 struct SweepCli {
   std::string case_file;
   std::vector<std::string> vary;
   std::string format;
   std::string output;
   unsigned threads = 0;
+  std::size_t max_points = kDefaultMaxSweepPoints;
 };
 
+// The total points of the grid, checked against the cap before any work: a grid of 31623 x 31623
+// points would otherwise stream until the disk fills. The product saturates instead of overflowing.
+std::size_t checked_sweep_size(const std::vector<VarySpec>& vary, std::size_t max_points) {
+  std::size_t total = 1;
+  std::string grid;
+  for (const VarySpec& spec : vary) {
+    const std::size_t n = spec.values.size();
+    total = (n != 0 && total > max_points / n) ? max_points + 1 : total * n;
+    grid += (grid.empty() ? "" : " x ") + std::to_string(n);
+  }
+  if (total > max_points) {
+    throw units::InputError(fmt::format("--vary: the grid of {} points exceeds the cap of {} points; use fewer STEPS, "
+                                        "or raise the cap with --max-points",
+                                        grid, max_points));
+  }
+  return total;
+}
+
 void run(const SweepCli& cli, const GlobalOptions& global) {
-  const CaseDefinition definition = load_case(cli.case_file);
   std::vector<VarySpec> vary;
   for (const std::string& text : cli.vary) vary.push_back(parse_vary(text));
+  const std::size_t total = checked_sweep_size(vary, cli.max_points);
+  const CaseDefinition definition = load_case(cli.case_file);
   check_sweep(definition, vary);
-  const std::size_t total = sweep_size(vary);
   if (cli.format == "html" && total > render::kSweepHtmlMaxPoints) {
     throw units::InputError(fmt::format("--format html holds every point for its plots: at most {} points ({} asked); "
                                         "use --format csv",
@@ -78,6 +99,9 @@ void add_sweep_command(CLI::App& app, const GlobalOptions& global) {
   add_format_option(*command, cli->format, {"csv", "html"});
   command->add_option("--output", cli->output, "Write to FILE (whole or not at all) instead of stdout");
   command->add_option("--threads", cli->threads, "Worker threads (default: all cores)");
+  command->add_option("--max-points", cli->max_points,
+                      fmt::format("Refuse grids of more points than this (default {})", kDefaultMaxSweepPoints))
+      ->check(CLI::PositiveNumber);
   command->callback([cli, &global] { run(*cli, global); });
 }
 
