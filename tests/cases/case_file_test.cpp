@@ -150,7 +150,7 @@ TEST(CaseFile, BrokenCasesFailWithLocatedMessagesAndNoOutputFile) {
 // Wrong if a missing case file were reported without its name.
 TEST(CaseFile, UnreadableFileIsNamed) {
   EXPECT_THROW_WITH(load_case("/nonexistent/plant.yaml"), units::InputError,
-                    "CASE = \"/nonexistent/plant.yaml\": cannot open the case file");
+                    "CASE = \"/nonexistent/plant.yaml\": no such case file");
 }
 
 // Wrong if the parser lost or rescaled a field: every number arrives in SI.

@@ -87,7 +87,7 @@ TEST(FuelFile, ErrorsNameTheFileLineAndField) {
   EXPECT_THROW_WITH(parse_fuel_file("fuel:\n  preset: coal\n", "f.yaml", db()), units::InputError,
                     "f.yaml:2:11: fuel.preset = \"coal\": unknown fuel preset");
   EXPECT_THROW_WITH(read_fuel_file("/nonexistent/fuel.yaml", db()), units::InputError,
-                    "FILE = \"/nonexistent/fuel.yaml\": cannot open the fuel file");
+                    "FILE = \"/nonexistent/fuel.yaml\": no such fuel file");
 }
 
 // ---------------------------------------------------------------------------------------------------
