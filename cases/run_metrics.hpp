@@ -5,7 +5,7 @@
 #include <string>
 #include <vector>
 
-#include "stackbound/cases/runner.hpp"
+#include "stackbound/cases/pipeline.hpp"
 
 namespace stackbound::cases {
 

@@ -8,8 +8,6 @@
 
 #include <fmt/format.h>
 
-#include "stackbound/cases/fuel_spec.hpp"
-#include "stackbound/core/equilibrium.hpp"
 #include "stackbound/units/input_error.hpp"
 #include "stackbound/units/nearest_name.hpp"
 #include "stackbound/units/quantity_parser.hpp"
@@ -142,12 +140,12 @@ void apply_parameter(CaseDefinition& definition, SweepParameter parameter, doubl
       }
       // The first component takes `value`; the others keep their proportions in the rest.
       double others = 0.0;
-      for (std::size_t i = 1; i < blend.size(); ++i) others += blend[i].second;
+      for (std::size_t i = 1; i < blend.size(); ++i) others += blend[i].fraction;
       for (std::size_t i = 1; i < blend.size(); ++i) {
-        blend[i].second = others > 0.0 ? blend[i].second / others * (1.0 - value)
-                                       : (1.0 - value) / static_cast<double>(blend.size() - 1);
+        blend[i].fraction = others > 0.0 ? blend[i].fraction / others * (1.0 - value)
+                                         : (1.0 - value) / static_cast<double>(blend.size() - 1);
       }
-      blend[0].second = value;
+      blend[0].fraction = value;
       break;
     }
   }
@@ -198,39 +196,35 @@ std::vector<double> values_at(const std::vector<VarySpec>& vary, std::size_t ind
   return values;
 }
 
-// One worker's state between its points: the previous equilibrium (warm start), the solver, and the
-// fuel, built once when no point changes it.
+// One worker's state between its points: its last point with a result (in the current batch, or
+// `kept` across batches), whose stage results the next point keeps where it may.
 struct WorkerState {
-  const core::EquilibriumResult* previous = nullptr;  // the worker's last result (owned by a batch or `kept`)
-  std::optional<core::EquilibriumResult> kept;        // the last result of the previous batch
-  std::shared_ptr<const core::EquilibriumSolver> solver;
-  std::array<bool, core::kElementCount> solver_elements{};
-  std::optional<core::Fuel> fuel;
+  const SweepPoint* previous = nullptr;
+  std::optional<SweepPoint> kept;
 };
 
+// How a point runs after `previous`: all its stages, the fire stage from the previous equilibrium,
+// keeping the fuel unless the sweep varies it.
+RunOptions point_options(const std::vector<VarySpec>& vary, const SweepPoint* previous) {
+  RunOptions options;
+  options.record_factors = false;
+  options.full_report = false;
+  if (previous == nullptr) return options;
+  options.previous = &*previous->result;
+  options.keep_fuel = std::none_of(vary.begin(), vary.end(),
+                                   [](const VarySpec& v) { return v.parameter == SweepParameter::blend_fraction; });
+  return options;
+}
+
 void run_point(const CaseDefinition& base, const std::vector<VarySpec>& vary, const core::SpeciesDatabase& database,
-               SweepPoint& point, WorkerState& state) {
+               const SourceMap* sources, SweepPoint& point, WorkerState& state) {
   try {
     CaseDefinition definition = base;
-    bool fuel_varied = false;
-    for (std::size_t k = 0; k < vary.size(); ++k) {
-      apply_parameter(definition, vary[k].parameter, point.values[k]);
-      fuel_varied = fuel_varied || vary[k].parameter == SweepParameter::blend_fraction;
-    }
-    if (!fuel_varied && !state.fuel) state.fuel = build_fuel(definition.fuel.fuel, database);
-    RunOptions options;
-    options.record_factors = false;
-    options.full_report = false;
-    options.fuel = fuel_varied ? nullptr : &*state.fuel;
-    options.warm_start = state.previous;
-    options.solver = state.solver;
-    options.solver_elements = state.solver_elements;
-    point.result = run_case(std::move(definition), database, options);
-    state.previous = &point.result->equilibrium;
-    state.solver = point.result->solver;
-    state.solver_elements = point.result->solver_elements;
+    for (std::size_t k = 0; k < vary.size(); ++k) apply_parameter(definition, vary[k].parameter, point.values[k]);
+    point.result = run_case(std::move(definition), database, point_options(vary, state.previous));
+    state.previous = &point;
   } catch (const std::exception& error) {
-    point.error = error.what();
+    point.error = sources != nullptr ? sources->locate(error.what()) : error.what();
   }
 }
 
@@ -260,8 +254,8 @@ std::size_t run_sweep(const CaseDefinition& base, const std::vector<VarySpec>& v
       if (begin >= end) break;
       workers.emplace_back([&, t, begin, end] {
         WorkerState& state = workers_state[t];
-        for (std::size_t i = begin; i < end; ++i) run_point(base, vary, database, batch[i], state);
-        // The batch is handed to the sink next: keep a copy of the last result for the next batch.
+        for (std::size_t i = begin; i < end; ++i) run_point(base, vary, database, options.sources, batch[i], state);
+        // The batch is handed to the sink next: keep a copy of the last point for the next batch.
         if (state.previous != nullptr && !(state.kept && state.previous == &*state.kept)) {
           state.kept = *state.previous;
           state.previous = &*state.kept;

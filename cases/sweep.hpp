@@ -1,18 +1,21 @@
 #pragma once
-// Sweeps: the cartesian grid of one or more case parameters, each point a full case run.
-// Points run in order along the grid (the last --vary changes fastest), each warm-started from the
-// previous point of its worker; workers take contiguous slices of fixed-size batches, and the batch
-// is handed to the sink in grid order before the next starts, so memory does not grow with the
-// number of points. A point that fails is reported with its parameters and the sweep goes on.
+// Sweeps: the cartesian grid of one or more case parameters, each point a run of the case's pipeline
+// (pipeline.hpp) without the screening stage. Points run in order along the grid (the last --vary
+// changes fastest); each point's fire stage starts from the previous point's equilibrium. Workers take
+// contiguous slices of fixed-size batches, and the batch is handed to the sink in grid order before
+// the next starts, so memory does not grow with the number of points. A point that fails is reported
+// with its parameters and the sweep goes on.
 
 #include <functional>
 #include <optional>
+#include <span>
 #include <string>
 #include <string_view>
 #include <vector>
 
 #include "stackbound/cases/case_definition.hpp"
-#include "stackbound/cases/runner.hpp"
+#include "stackbound/cases/pipeline.hpp"
+#include "stackbound/cases/source_map.hpp"
 #include "stackbound/core/species_database.hpp"
 
 namespace stackbound::cases {
@@ -71,6 +74,9 @@ struct SweepOptions {
   std::size_t batch_points = 512;     // points held in memory at once
   // Called after each batch with the number of points done so far.
   std::function<void(std::size_t done, std::size_t total)> progress;
+  // Where the case's fields were written (LoadedCase::sources): errors of a point name their field's
+  // file position instead of its path. Not owned; nullptr keeps the paths.
+  const SourceMap* sources = nullptr;
 };
 
 // Runs the grid; `sink` receives every point once, in grid order. Returns the number of failed points.

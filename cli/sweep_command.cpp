@@ -27,7 +27,8 @@ struct SweepCli {
 };
 
 void run(const SweepCli& cli, const GlobalOptions& global) {
-  const CaseDefinition definition = load_case(cli.case_file);
+  const LoadedCase loaded = load_case_file(cli.case_file);
+  const CaseDefinition& definition = loaded.definition;
   std::vector<VarySpec> vary;
   for (const std::string& text : cli.vary) vary.push_back(parse_vary(text));
   check_sweep(definition, vary);
@@ -41,6 +42,7 @@ void run(const SweepCli& cli, const GlobalOptions& global) {
   const ProgressBar progress;
   SweepOptions options;
   options.threads = cli.threads;
+  options.sources = &loaded.sources;
   options.progress = [&](std::size_t done, std::size_t all) { progress.update(done, all); };
   OutputStream out(cli.output);
   std::size_t failed = 0;

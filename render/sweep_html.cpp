@@ -17,7 +17,7 @@ void SweepHtmlCollector::add(const SweepPoint& point) {
   if (point.result) {
     if (columns_.empty()) {
       columns_ = run_metric_columns(*point.result);
-      reference_o2_ = emissions::percent_text(point.result->reference_o2_dry) + " % O2";
+      reference_o2_ = emissions::percent_text(point.result->emissions.reference_o2_dry) + " % O2";
     }
     const std::vector<double> values = run_metric_values(*point.result);
     for (std::size_t k = 0; k < values.size() && k < columns_.size(); ++k) row.metrics[columns_[k].key] = values[k];

@@ -26,8 +26,8 @@ using stackbound::testing::run_stackbound;
 std::string example(const char* name) { return std::string(STACKBOUND_SOURCE_DIR) + "/cases/examples/" + name; }
 
 const PollutantBound& bound(const RunResult& run, const std::string& name) {
-  const auto found = std::find_if(run.pollutants.begin(), run.pollutants.end(), [&](const auto& p) { return p.name == name; });
-  if (found == run.pollutants.end()) throw std::runtime_error("no pollutant " + name);
+  const auto found = std::find_if(run.emissions.pollutants.begin(), run.emissions.pollutants.end(), [&](const auto& p) { return p.name == name; });
+  if (found == run.emissions.pollutants.end()) throw std::runtime_error("no pollutant " + name);
   return *found;
 }
 
@@ -99,7 +99,7 @@ TEST(Sweep, AdiabaticFlameTemperaturePeaksNearStoichiometric) {
   std::size_t hottest = 0;
   for (std::size_t i = 0; i < points.size(); ++i) {
     ASSERT_TRUE(points[i].result.has_value()) << points[i].error;
-    if (points[i].result->firing_temperature_K > points[hottest].result->firing_temperature_K) hottest = i;
+    if (points[i].result->fired.temperature_K > points[hottest].result->fired.temperature_K) hottest = i;
   }
   const double excess_air_at_peak = points[hottest].values[0];
   EXPECT_GE(excess_air_at_peak, -0.10);
