@@ -6,8 +6,9 @@
 
 namespace stackbound::cases {
 
-std::vector<MetricColumn> run_metric_columns(const RunResult& r) {
-  const std::string ref = fmt::format("@ {} % O2", emissions::percent_text(r.emissions.reference_o2_dry));
+std::vector<MetricColumn> run_metric_columns(const RunResult& r, bool reference_o2_varies) {
+  const std::string ref = reference_o2_varies ? std::string("@ reference O2")
+                                              : fmt::format("@ {} % O2", emissions::percent_text(r.emissions.reference_o2_dry));
   std::vector<MetricColumn> columns = {
       {"firing_temperature_K", "firing temperature [K]"},
       {"excess_air_percent", "excess air [%]"},

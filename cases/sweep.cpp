@@ -18,9 +18,10 @@ namespace {
 
 using units::Dimension;
 
-constexpr std::array<std::string_view, 9> kNames{"excess_air",    "flue_o2",  "firing_temperature",
-                                                 "heat_loss",     "air_preheat", "humidity",
-                                                 "o2_enrichment", "pressure", "blend_fraction"};
+constexpr std::array<std::string_view, 10> kNames{"excess_air",    "flue_o2",  "firing_temperature",
+                                                  "heat_loss",     "air_preheat", "humidity",
+                                                  "o2_enrichment", "pressure", "blend_fraction",
+                                                  "reference_o2"};
 
 Dimension dimension_of(SweepParameter parameter) {
   switch (parameter) {
@@ -38,6 +39,22 @@ Dimension dimension_of(SweepParameter parameter) {
 }  // namespace
 
 std::span<const std::string_view> sweep_parameter_names() { return kNames; }
+
+Stage first_stage_reading(SweepParameter parameter) {
+  switch (parameter) {
+    case SweepParameter::excess_air:
+    case SweepParameter::flue_o2:
+    case SweepParameter::air_preheat:
+    case SweepParameter::humidity:
+    case SweepParameter::o2_enrichment:
+    case SweepParameter::blend_fraction: return Stage::resolve;
+    case SweepParameter::firing_temperature:
+    case SweepParameter::heat_loss:
+    case SweepParameter::pressure: return Stage::fire;
+    case SweepParameter::reference_o2: return Stage::emissions;
+  }
+  return Stage::resolve;
+}
 
 std::string_view sweep_parameter_name(SweepParameter parameter) { return kNames[static_cast<std::size_t>(parameter)]; }
 
@@ -148,6 +165,12 @@ void apply_parameter(CaseDefinition& definition, SweepParameter parameter, doubl
       blend[0].fraction = value;
       break;
     }
+    case SweepParameter::reference_o2:
+      if (!(value >= 0.0 && value <= 0.2)) {
+        throw units::InputError(fmt::format("--vary reference_o2 = {:.6g} %: must be between 0 % and 20 %", value * 100.0));
+      }
+      definition.report.reference_o2_fraction = value;
+      break;
   }
 }
 
@@ -203,16 +226,23 @@ struct WorkerState {
   std::optional<SweepPoint> kept;
 };
 
-// How a point runs after `previous`: all its stages, the fire stage from the previous equilibrium,
-// keeping the fuel unless the sweep varies it.
-RunOptions point_options(const std::vector<VarySpec>& vary, const SweepPoint* previous) {
+// How a point runs after `previous`: from the first stage reading a parameter whose value changed,
+// keeping the fuel unless the blend changed.
+RunOptions point_options(const std::vector<VarySpec>& vary, const SweepPoint& point, const SweepPoint* previous) {
   RunOptions options;
   options.record_factors = false;
   options.full_report = false;
   if (previous == nullptr) return options;
   options.previous = &*previous->result;
-  options.keep_fuel = std::none_of(vary.begin(), vary.end(),
-                                   [](const VarySpec& v) { return v.parameter == SweepParameter::blend_fraction; });
+  options.rerun_from = Stage::screening;
+  options.keep_fuel = true;
+  for (std::size_t k = 0; k < vary.size(); ++k) {
+    if (point.values[k] == previous->values[k]) continue;
+    options.rerun_from = std::min(options.rerun_from, first_stage_reading(vary[k].parameter));
+    if (vary[k].parameter == SweepParameter::blend_fraction) options.keep_fuel = false;
+  }
+  // A repeated point (no change) still computes its figures.
+  options.rerun_from = std::min(options.rerun_from, Stage::emissions);
   return options;
 }
 
@@ -221,7 +251,7 @@ void run_point(const CaseDefinition& base, const std::vector<VarySpec>& vary, co
   try {
     CaseDefinition definition = base;
     for (std::size_t k = 0; k < vary.size(); ++k) apply_parameter(definition, vary[k].parameter, point.values[k]);
-    point.result = run_case(std::move(definition), database, point_options(vary, state.previous));
+    point.result = run_case(std::move(definition), database, point_options(vary, point, state.previous));
     state.previous = &point;
   } catch (const std::exception& error) {
     point.error = sources != nullptr ? sources->locate(error.what()) : error.what();

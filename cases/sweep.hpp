@@ -1,7 +1,9 @@
 #pragma once
 // Sweeps: the cartesian grid of one or more case parameters, each point a run of the case's pipeline
 // (pipeline.hpp) without the screening stage. Points run in order along the grid (the last --vary
-// changes fastest); each point's fire stage starts from the previous point's equilibrium. Workers take
+// changes fastest); each point re-runs only the stages that read a parameter changed since the
+// previous point of its worker and keeps that point's other stage results (a reference-O2 step needs
+// no new equilibrium), and its fire stage starts from the previous equilibrium. Workers take
 // contiguous slices of fixed-size batches, and the batch is handed to the sink in grid order before
 // the next starts, so memory does not grow with the number of points. A point that fails is reported
 // with its parameters and the sweep goes on.
@@ -30,7 +32,12 @@ enum class SweepParameter {
   o2_enrichment,
   pressure,
   blend_fraction,
+  reference_o2,
 };
+
+// The first stage that reads a parameter: a point that changes only parameters read from stage N on
+// keeps the previous point's results of the stages before N.
+Stage first_stage_reading(SweepParameter parameter);
 
 // The parameter names accepted by --vary, in this order.
 std::span<const std::string_view> sweep_parameter_names();
@@ -53,7 +60,8 @@ struct VarySpec {
 VarySpec parse_vary(std::string_view text);
 
 // Sets one parameter of a copy of the case; throws units::InputError where the case cannot take it
-// (heat_loss on a case with a stated firing temperature, blend_fraction on a single fuel).
+// (heat_loss on a case with a stated firing temperature, blend_fraction on a single fuel, a reference
+// O2 outside 0-20 %).
 void apply_parameter(CaseDefinition& definition, SweepParameter parameter, double value_si);
 
 // Checks that every parameter can be applied to the case (before any point runs).
@@ -62,7 +70,8 @@ void check_sweep(const CaseDefinition& definition, const std::vector<VarySpec>& 
 struct SweepPoint {
   std::size_t index = 0;
   std::vector<double> values;          // SI, one per VarySpec
-  std::optional<RunResult> result;     // empty when the point failed
+  std::optional<RunResult> result;     // empty when the point failed; result->stages_run tells which
+                                       // stages ran for this point (the others were kept)
   std::string error;                   // why it failed
 };
 
