@@ -51,7 +51,8 @@ void run(const SweepCli& cli, const GlobalOptions& global) {
   std::vector<VarySpec> vary;
   for (const std::string& text : cli.vary) vary.push_back(parse_vary(text));
   const std::size_t total = checked_sweep_size(vary, cli.max_points);
-  const CaseDefinition definition = load_case(cli.case_file);
+  const LoadedCase loaded = load_case_file(cli.case_file);
+  const CaseDefinition& definition = loaded.definition;
   check_sweep(definition, vary);
   if (cli.format == "html" && total > render::kSweepHtmlMaxPoints) {
     throw units::InputError(fmt::format("--format html holds every point for its plots: at most {} points ({} asked); "
@@ -62,6 +63,7 @@ void run(const SweepCli& cli, const GlobalOptions& global) {
   const ProgressBar progress;
   SweepOptions options;
   options.threads = cli.threads;
+  options.sources = &loaded.sources;
   options.progress = [&](std::size_t done, std::size_t all) { progress.update(done, all); };
   OutputStream out(cli.output);
   std::size_t failed = 0;
@@ -92,8 +94,9 @@ void add_sweep_command(CLI::App& app, const GlobalOptions& global) {
       "  stackbound sweep cases/examples/gas_boiler.yaml --vary excess_air=8%:15%:8 --format html --output ea.html\n"
       "  stackbound sweep cases/examples/wood_chip_boiler.yaml --vary air_preheat=20degC:320degC:7 --vary heat_loss=10%:30%:3\n"
       "Parameters: excess_air, flue_o2, firing_temperature, heat_loss, air_preheat, humidity, o2_enrichment,\n"
-      "pressure, blend_fraction; values with units; STEPS >= 2 points; the last --vary changes fastest.\n"
-      "Exit codes: 0 all points ran, 2 bad input, 4 some points failed (their rows say why).");
+      "pressure, blend_fraction, reference_o2; values with units; STEPS >= 2 points; the last --vary changes fastest.\n"
+      "Exit codes: 0 all points ran, 2 bad input, 4 some points failed (their rows say why).\n"
+      "At most --max-points points (default 10000000): the grid is checked before any work.");
   command->add_option("CASE", cli->case_file, "Case file (YAML)")->required();
   command->add_option("--vary", cli->vary, "PARAM=FROM:TO:STEPS, e.g. excess_air=5%:45%:9 (repeatable)")->required();
   add_format_option(*command, cli->format, {"csv", "html"});

@@ -1,5 +1,6 @@
 #include "stackbound/render/sweep_csv.hpp"
 
+#include <algorithm>
 #include <array>
 #include <charconv>
 #include <cmath>
@@ -51,7 +52,9 @@ void SweepCsvWriter::write_header(const RunResult* first) {
   for (const VarySpec& v : vary_) line += "," + csv_cell(sweep_parameter_label(v.parameter));
   line += ",status";
   if (first != nullptr) {
-    const std::vector<MetricColumn> columns = run_metric_columns(*first);
+    const bool reference_o2_varies = std::any_of(
+        vary_.begin(), vary_.end(), [](const VarySpec& v) { return v.parameter == SweepParameter::reference_o2; });
+    const std::vector<MetricColumn> columns = run_metric_columns(*first, reference_o2_varies);
     for (const MetricColumn& column : columns) line += "," + csv_cell(column.header);
     metric_count_ = columns.size();
   }
