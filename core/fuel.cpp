@@ -481,8 +481,10 @@ Fuel Fuel::blend(std::string name, const std::vector<BlendPart>& parts, BlendBas
     const Fuel& part = parts[i].fuel;
     if (w == 0.0) continue;
     for (const auto& [formula, n] : part.gas_mol_per_kg_) {
+      // Captures a named copy, not the structured binding: capturing a binding is new in C++20 and
+      // not every supported compiler has it yet.
       auto found = std::find_if(fuel.gas_mol_per_kg_.begin(), fuel.gas_mol_per_kg_.end(),
-                                [&](const auto& item) { return item.first == formula; });
+                                [name = formula](const auto& item) { return item.first == name; });
       if (found == fuel.gas_mol_per_kg_.end()) {
         fuel.gas_mol_per_kg_.emplace_back(formula, w * n);
       } else {
