@@ -5,6 +5,7 @@
 #include <yaml-cpp/yaml.h>
 
 #include "stackbound/cases/input_file.hpp"
+#include "stackbound/cases/yaml_document.hpp"
 #include "stackbound/units/input_error.hpp"
 
 namespace stackbound::cases {
@@ -45,7 +46,7 @@ core::Species species_from(std::string_view origin, const YAML::Node& node, std:
   static const char* const kKeys[] = {"formula", "composition", "phase", "range_K",
                                       "below_mid", "above_mid", "source", "origin"};
   for (const auto& entry : node) {
-    const std::string key = entry.first.as<std::string>();
+    const std::string key = entry.first.Scalar();
     if (std::find(std::begin(kKeys), std::end(kKeys), key) == std::end(kKeys)) {
       fail(origin, entry.first, where + "." + key,
            "unknown key; accepted: formula, composition, phase, range_K, below_mid, above_mid, source, origin");
@@ -63,8 +64,8 @@ core::Species species_from(std::string_view origin, const YAML::Node& node, std:
   }
   for (const auto& entry : composition) {
     record.composition.push_back(
-        {entry.first.as<std::string>(),
-         number_at(origin, entry.second, field + ".composition." + entry.first.as<std::string>())});
+        {entry.first.Scalar(),
+         number_at(origin, entry.second, field + ".composition." + entry.first.Scalar())});
   }
 
   const YAML::Node phase = node["phase"];
@@ -100,13 +101,7 @@ core::Species species_from(std::string_view origin, const YAML::Node& node, std:
 }  // namespace
 
 std::vector<core::Species> parse_species_yaml(std::string_view text, std::string_view origin) {
-  YAML::Node root;
-  try {
-    root = YAML::Load(std::string(text));
-  } catch (const YAML::ParserException& error) {
-    throw units::InputError(fmt::format("{}:{}:{}: not valid YAML: {}", origin, error.mark.line + 1,
-                                        error.mark.column + 1, error.msg));
-  }
+  const YAML::Node root = load_yaml_document(text, origin);
   if (!root.IsMap() || !root["species"] || !root["species"].IsSequence()) {
     throw units::InputError(fmt::format("{}: expected a top-level key `species:` holding a list of records", origin));
   }

@@ -4,6 +4,7 @@
 
 #include <fmt/format.h>
 
+#include "stackbound/cases/yaml_document.hpp"
 #include "stackbound/units/input_error.hpp"
 #include "stackbound/units/nearest_name.hpp"
 
@@ -13,19 +14,13 @@ YamlField::YamlField(YAML::Node node, std::string origin, std::string path, Sour
     : node_(std::move(node)), origin_(std::move(origin)), path_(std::move(path)), sources_(sources) {}
 
 YamlField YamlField::load(std::string_view text, const std::string& origin, SourceMap* sources) {
-  try {
-    YAML::Node root = YAML::Load(std::string(text));
-    YamlField field(root, origin, "", sources);
-    if (!root.IsMap()) {
-      throw units::InputError(fmt::format("{}:1:1: the case file must be a YAML mapping of sections (case, fuel, air, "
-                                          "operating_point, firing, stack, report)",
-                                          origin));
-    }
-    return field;
-  } catch (const YAML::ParserException& error) {
-    throw units::InputError(
-        fmt::format("{}:{}:{}: not valid YAML: {}", origin, error.mark.line + 1, error.mark.column + 1, error.msg));
+  const YAML::Node root = load_yaml_document(text, origin);
+  if (!root.IsMap()) {
+    throw units::InputError(fmt::format("{}:1:1: the case file must be a YAML mapping of sections (case, fuel, air, "
+                                        "operating_point, firing, stack, report)",
+                                        origin));
   }
+  return YamlField(root, origin, "", sources);
 }
 
 YamlField YamlField::child(YAML::Node node, std::string path) const {
@@ -54,7 +49,7 @@ void YamlField::allow_only(std::initializer_list<std::string_view> allowed) cons
   if (!node_.IsMap()) fail("expected a mapping of keys");
   const std::vector<std::string> names(allowed.begin(), allowed.end());
   for (const auto& entry : node_) {
-    const std::string key = entry.first.as<std::string>();
+    const std::string key = entry.first.Scalar();
     if (std::find(names.begin(), names.end(), key) != names.end()) continue;
     std::string problem = fmt::format("unknown key \"{}\"", key);
     if (const auto suggestion = units::nearest_name(key, names)) problem += fmt::format(" (did you mean \"{}\"?)", *suggestion);
@@ -99,7 +94,7 @@ std::vector<std::pair<std::string, YamlField>> YamlField::entries() const {
   if (!node_.IsMap()) fail("expected a mapping of keys");
   std::vector<std::pair<std::string, YamlField>> result;
   for (const auto& entry : node_) {
-    const std::string key = entry.first.as<std::string>();
+    const std::string key = entry.first.Scalar();
     result.emplace_back(key, child(entry.second, path_.empty() ? key : path_ + "." + key));
   }
   return result;
