@@ -8,6 +8,7 @@
 
 #include "stackbound/cases/fuel_spec.hpp"
 #include "stackbound/cases/input_file.hpp"
+#include "stackbound/cases/plausible_ranges.hpp"
 #include "stackbound/cases/yaml_reader.hpp"
 #include "stackbound/emissions/basis.hpp"
 #include "stackbound/units/input_error.hpp"
@@ -39,7 +40,11 @@ double fraction_in(const YamlField& field, double low, double high, const char* 
 }
 
 double temperature_K(const YamlField& field) { return field.quantity_si(Dimension::temperature); }
-double pressure_Pa(const YamlField& field) { return field.quantity_si(Dimension::pressure); }
+double pressure_Pa(const YamlField& field, const PlausibleRange& range) {
+  const double value = field.quantity_si(Dimension::pressure);
+  if (const auto problem = outside(value, range)) field.fail(*problem);
+  return value;
+}
 
 std::vector<std::string> string_list(const YamlField& field) {
   std::vector<std::string> items;
@@ -70,6 +75,7 @@ FuelFeedSpec fuel_feed(const YamlField& fuel) {
   const YamlField rate = fuel.required("feed_rate");
   feed.feed_rate = rate.quantity({Dimension::mass_flow, Dimension::molar_flow, Dimension::power});
   if (feed.feed_rate.value_si <= 0.0) rate.fail("must be > 0");
+  if (const auto problem = outside(feed.feed_rate.value_si, feed_range(feed.feed_rate.dimension))) rate.fail(*problem);
   if (const auto t = fuel.optional("temperature")) feed.temperature_K = temperature_K(*t);
   return feed;
 }
@@ -87,7 +93,7 @@ AirSpec air_spec(const std::optional<YamlField>& air) {
     spec.relative_humidity = fraction_in(*rh, 0.0, 1.0, "must be between 0 % and 100 %");
   }
   if (const auto t = air->optional("ambient_temperature")) spec.ambient_temperature_K = temperature_K(*t);
-  if (const auto p = air->optional("ambient_pressure")) spec.ambient_pressure_Pa = pressure_Pa(*p);
+  if (const auto p = air->optional("ambient_pressure")) spec.ambient_pressure_Pa = pressure_Pa(*p, kAmbientPressure);
   if (const auto w = air->optional("humidity_ratio")) {
     spec.humidity_ratio_kg_per_kg = w->number();
     if (!(*spec.humidity_ratio_kg_per_kg >= 0.0 && *spec.humidity_ratio_kg_per_kg < 0.5)) {
@@ -141,7 +147,7 @@ FiringSpec firing_spec(const YamlField& firing) {
     spec.temperature_K = temperature_K(firing.required("temperature"));
     if (firing.has("heat_loss")) firing.required("heat_loss").fail("applies only with adiabatic: true");
   }
-  if (const auto p = firing.optional("pressure")) spec.pressure_Pa = pressure_Pa(*p);
+  if (const auto p = firing.optional("pressure")) spec.pressure_Pa = pressure_Pa(*p, kFiringPressure);
   if (const auto species = firing.optional("species")) spec.species = string_list(*species);
   return spec;
 }
@@ -172,7 +178,7 @@ StackSpec stack_spec(const std::optional<YamlField>& stack, const units::NormalC
   if (!stack) return spec;
   stack->allow_only({"temperature", "pressure", "measured"});
   if (const auto t = stack->optional("temperature")) spec.temperature_K = temperature_K(*t);
-  if (const auto p = stack->optional("pressure")) spec.pressure_Pa = pressure_Pa(*p);
+  if (const auto p = stack->optional("pressure")) spec.pressure_Pa = pressure_Pa(*p, kStackPressure);
   if (const auto measured = stack->optional("measured")) spec.measured = measured_spec(*measured, normal);
   return spec;
 }

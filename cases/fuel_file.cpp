@@ -6,6 +6,7 @@
 
 #include "stackbound/cases/fuel_spec.hpp"
 #include "stackbound/cases/input_file.hpp"
+#include "stackbound/cases/plausible_ranges.hpp"
 #include "stackbound/cases/source_map.hpp"
 #include "stackbound/cases/yaml_reader.hpp"
 #include "stackbound/units/input_error.hpp"
@@ -28,6 +29,9 @@ FuelFile parse_fuel_file(std::string_view text, const std::string& origin, const
     file.feed_rate = rate->quantity({Dimension::mass_flow, Dimension::molar_flow, Dimension::power});
     file.feed_rate_text = rate->text();
     if (!(file.feed_rate->value_si > 0.0)) rate->fail("must be > 0");
+    if (const auto problem = outside(file.feed_rate->value_si, feed_range(file.feed_rate->dimension))) {
+      rate->fail(*problem);
+    }
   }
   if (const auto t = fuel.optional("temperature")) file.temperature_K = t->quantity_si(Dimension::temperature);
   return file;

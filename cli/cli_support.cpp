@@ -5,6 +5,7 @@
 #include <fmt/format.h>
 
 #include "stackbound/units/input_error.hpp"
+#include "stackbound/units/quantity_parser.hpp"
 
 namespace stackbound::cli {
 
@@ -14,6 +15,14 @@ CLI::Option* add_format_option(CLI::App& command, std::string& format, const std
       ->check(CLI::IsMember(accepted))
       ->default_str(accepted.front())
       ->capture_default_str();
+}
+
+units::Pressure checked_pressure(std::string_view text, std::string_view option, const cases::PlausibleRange& range) {
+  const units::Pressure pressure = units::parse_pressure(text, option);
+  if (const auto problem = cases::outside(pressure.value(), range)) {
+    throw units::InputError(fmt::format("{} = \"{}\": {}", option, text, *problem));
+  }
+  return pressure;
 }
 
 std::vector<std::string> split_list(std::string_view text, std::string_view option) {

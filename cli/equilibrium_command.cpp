@@ -152,7 +152,7 @@ void run(const EquilibriumOptions& options, const GlobalOptions& global) {
   const std::vector<core::SpeciesAmount> feed = core::parse_reactants(options.feed, "--feed", database);
   const core::ElementAmounts b = core::element_amounts(database, feed, "--feed");
   const double pressure_Pa = options.pressure.empty() ? units::kStandardAtmosphere_Pa
-                                                      : units::parse_pressure(options.pressure, "--pressure").value();
+                                                      : checked_pressure(options.pressure, "--pressure", cases::kFiringPressure).value();
   if (options.adiabatic && !options.temperature.empty()) {
     throw units::InputError(fmt::format(
         "--temperature = \"{}\": give either --temperature (fixed T) or --adiabatic, not both", options.temperature));

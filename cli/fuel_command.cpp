@@ -185,7 +185,7 @@ core::Oxidant build_oxidant(const FuelOptions& o) {
                                       : units::parse_temperature(o.ambient_temperature, "--ambient-temperature");
     const units::Pressure pressure = o.ambient_pressure.empty()
                                          ? units::pascals(units::kStandardAtmosphere_Pa)
-                                         : units::parse_pressure(o.ambient_pressure, "--ambient-pressure");
+                                         : checked_pressure(o.ambient_pressure, "--ambient-pressure", cases::kAmbientPressure);
     options.humidity = core::Humidity::relative(rh, ambient, pressure, "--relative-humidity");
   } else if (!o.ambient_temperature.empty() || !o.ambient_pressure.empty()) {
     throw units::InputError("--ambient-temperature, --ambient-pressure: they state where --relative-humidity was "
@@ -227,7 +227,7 @@ core::OperatingPoint build_operating_point(const FuelOptions& o, std::optional<d
     op.fuel_temperature = units::kelvin(*file_temperature_K);
   }
   op.fuel_temperature_field = "--fuel-temperature";
-  if (!o.pressure.empty()) op.flue_pressure = units::parse_pressure(o.pressure, "--pressure");
+  if (!o.pressure.empty()) op.flue_pressure = checked_pressure(o.pressure, "--pressure", cases::kStackPressure);
   return op;
 }
 
@@ -498,7 +498,12 @@ void run(const FuelOptions& o, const GlobalOptions& global) {
   const core::HeatInputBasis basis = o.heat_basis == "lhv" ? core::HeatInputBasis::lhv : core::HeatInputBasis::hhv;
   std::optional<core::CombustionRates> rates;
   if (!o.rate.empty()) {
-    rates = core::rates(result, core::resolve_feed(fuel, o.rate, basis, "--rate"));
+    const units::ParsedQuantity rate =
+        units::parse_quantity(o.rate, "--rate", {Dimension::mass_flow, Dimension::molar_flow, Dimension::power});
+    if (const auto problem = cases::outside(rate.value_si, cases::feed_range(rate.dimension))) {
+      throw units::InputError(fmt::format("--rate = \"{}\": {}", o.rate, *problem));
+    }
+    rates = core::rates(result, core::resolve_feed(fuel, rate, basis, "--rate"));
   } else if (input.file_rate) {
     rates = core::rates(result, core::resolve_feed(fuel, *input.file_rate, basis, "fuel.feed_rate"));
   }

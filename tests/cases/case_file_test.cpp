@@ -233,3 +233,29 @@ TEST(CaseFile, TheLoaderRecordsWhereEachFieldWasWritten) {
 
 }  // namespace
 }  // namespace stackbound::cases
+
+namespace stackbound::cases {
+namespace {
+
+// Wrong if nonsense pressures and feeds ran and were screened (1e308 Pa "below the limit", exit 0):
+// each is refused at load with the range stated.
+TEST(CaseFile, PhysicalInputsOutsideThePlausibleRangesAreRefused) {
+  const std::string v = kValidCase;
+  EXPECT_THROW_WITH((void)parse_case(replaced(v, "  temperature: 1800 K\n", "  temperature: 1800 K\n  pressure: 1e308 Pa\n"), "f.yaml"),
+                    units::InputError,
+                    "f.yaml:10:13: firing.pressure = \"1e308 Pa\": outside 1 kPa to 10000 kPa, the range this tool accepts "
+                    "for a firing pressure (ideal-gas equilibrium)");
+  EXPECT_THROW_WITH((void)parse_case(replaced(v, "  temperature: 1800 K\n", "  temperature: 1800 K\n  pressure: 1e-300 Pa\n"), "f.yaml"),
+                    units::InputError, "firing.pressure = \"1e-300 Pa\": outside 1 kPa to 10000 kPa");
+  EXPECT_THROW_WITH((void)parse_case(replaced(v, "100 Nm3/h", "1e-300 kg/h"), "f.yaml"), units::InputError,
+                    "fuel.feed_rate = \"1e-300 kg/h\": outside 1e-07 kg/s to 10000 kg/s, the range this tool accepts for a fuel feed");
+  EXPECT_THROW_WITH((void)parse_case(replaced(v, "100 Nm3/h", "1e308 kg/h"), "f.yaml"), units::InputError,
+                    "fuel.feed_rate = \"1e308 kg/h\": outside");
+  EXPECT_THROW_WITH((void)parse_case(replaced(v, "report:", "stack:\n  pressure: 3 bar\nreport:"), "f.yaml"),
+                    units::InputError, "stack.pressure = \"3 bar\": outside 50 kPa to 200 kPa");
+  EXPECT_NO_THROW((void)parse_case(replaced(v, "  temperature: 1800 K\n", "  temperature: 1800 K\n  pressure: 25 bar\n"), "f.yaml"))
+      << "a gas-turbine combustor pressure is in range";
+}
+
+}  // namespace
+}  // namespace stackbound::cases

@@ -77,3 +77,24 @@ TEST(HostileInput, CaseFileAboveTheSizeCapIsRefused) {
 
 }  // namespace
 }  // namespace stackbound::cli
+
+namespace stackbound::cli {
+namespace {
+
+// Wrong if `equilibrium` at 1e308 Pa returned H2O2 mole fraction 1 after 0 iterations, or `fuel --rate
+// "1e308 kg/h"` printed inf: both refused with the accepted range.
+TEST(HostileInput, CommandLinePressuresAndRatesOutsideThePlausibleRangesAreRefused) {
+  const auto eq = testing::run_stackbound(
+      {"equilibrium", "--feed", "CH4 + 2 O2 + 7.52 N2", "--temperature", "2000K", "--pressure", "1e308 Pa"});
+  EXPECT_EQ(eq.exit_code, 2);
+  EXPECT_NE(eq.err.find("--pressure = \"1e308 Pa\": outside 1 kPa to 10000 kPa"), std::string::npos) << eq.err;
+  const auto fuel = testing::run_stackbound({"fuel", "--preset", "natural_gas", "--rate", "1e308 kg/h"});
+  EXPECT_EQ(fuel.exit_code, 2);
+  EXPECT_NE(fuel.err.find("--rate = \"1e308 kg/h\": outside 1e-07 kg/s to 10000 kg/s, the range this tool accepts for a fuel feed"),
+            std::string::npos)
+      << fuel.err;
+  EXPECT_EQ(fuel.out.find("inf"), std::string::npos);
+}
+
+}  // namespace
+}  // namespace stackbound::cli
