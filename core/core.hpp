@@ -1,8 +1,9 @@
 #pragma once
 // Umbrella header of the core layer: elements and species data, chemical equilibrium (TP and HP),
 // fuels and the notation of compositions, oxidant, humidity, complete-combustion stoichiometry and the
-// post-flame kinetics (thermal NO).
+// post-flame kinetics (thermal NO, CO burnout).
 #include "stackbound/core/adiabatic_flame.hpp"
+#include "stackbound/core/co_burnout.hpp"
 #include "stackbound/core/combustion.hpp"
 #include "stackbound/core/composition_notation.hpp"
 #include "stackbound/core/element_amounts.hpp"
