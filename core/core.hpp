@@ -1,7 +1,7 @@
 #pragma once
 // Umbrella header of the core layer: elements and species data, chemical equilibrium (TP and HP),
 // fuels and the notation of compositions, oxidant, humidity, complete-combustion stoichiometry and the
-// post-flame kinetics (thermal NO, CO burnout).
+// post-flame kinetics (thermal NO, CO burnout, fuel-nitrogen NO).
 #include "stackbound/core/adiabatic_flame.hpp"
 #include "stackbound/core/co_burnout.hpp"
 #include "stackbound/core/combustion.hpp"
@@ -10,6 +10,7 @@
 #include "stackbound/core/elements.hpp"
 #include "stackbound/core/equilibrium.hpp"
 #include "stackbound/core/fuel.hpp"
+#include "stackbound/core/fuel_nitrogen.hpp"
 #include "stackbound/core/fuel_presets.hpp"
 #include "stackbound/core/humidity.hpp"
 #include "stackbound/core/oxidant.hpp"
