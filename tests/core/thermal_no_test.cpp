@@ -36,8 +36,9 @@ ElementAmounts methane_air(double lambda = 1.15) {
 }
 
 struct Fixture {
-  ElementAmounts b = methane_air();
-  EquilibriumSolver solver{db(), b};
+  explicit Fixture(double lambda = 1.15) : b(methane_air(lambda)), solver(db(), b) {}
+  ElementAmounts b;
+  EquilibriumSolver solver;
 
   ThermalNoResult at(double T_K, double t_s, const ThermalNoOptions& options = {}) const {
     return thermal_no(solver, b, units::kelvin(T_K), units::pascals(kAtm_Pa), units::seconds(t_s), options);
@@ -153,10 +154,16 @@ TEST(ThermalNo, StaysBelowOnePpmAt1400KAfterOneSecond) {
 
 // Wrong if the closed-form integration disagreed with a direct integration of the published rate
 // law (written out in this test) by fourth-order Runge-Kutta with tiny steps, from zero NO and from
-// NO far above equilibrium, or if the rate function disagreed with the published law.
+// NO far above equilibrium, lean and rich (where little O2 makes beta large), or if the rate function
+// disagreed with the published law.
 TEST(ThermalNo, ClosedFormMatchesARungeKuttaIntegrationOfThePublishedRateLaw) {
-  const Fixture f;
-  for (const double T : {1900.0, 2200.0, 2500.0}) {
+  const Fixture lean;
+  const Fixture rich(0.85);
+  for (const auto& [f, T] : {std::pair<const Fixture&, double>{lean, 1900.0},
+                             {lean, 2200.0},
+                             {lean, 2500.0},
+                             {rich, 2000.0},
+                             {rich, 2300.0}}) {
     const PostFlameGas gas = f.gas(T);
     const double c = gas.concentration_mol_per_m3;
     for (const double fraction : {0.0, 0.3, 0.9, 1.0, 2.5}) {
