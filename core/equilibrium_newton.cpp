@@ -24,6 +24,7 @@ using detail::Vector;
 // e^2 per step (and n by e^0.4); a trace species may rise to at most mole fraction 1e-4 in one step.
 constexpr double kTraceLogFraction = -18.420680743952367;        // ln 1e-8
 constexpr double kTraceCeilingLogFraction = -9.210340371976184;  // ln 1e-4
+constexpr double kLn10 = 2.302585092994046;
 // Condensed phase entry: g_c/RT - sum_k a_kc pi_k below this (dimensionless) admits the species.
 constexpr double kPhaseEntryTolerance = -1e-10;
 constexpr int kMaxPhaseChanges = 20;
@@ -232,6 +233,27 @@ bool extrapolate(const TpProblem& problem, double combined_residual, Iterate& it
 
 // Turns `mu` into the corrections of ln n_j (from the new pi and d ln n) and returns the step length
 // lambda of RP-1311 eqs. 3.1-3.3.
+// ln of the most moles of `t` its scarcest element allows (b_k / a_kj, per mole of feed atoms).
+double budget_ln_moles(const TpProblem& problem, const Term& t) {
+  double budget = std::numeric_limits<double>::infinity();
+  for (int p = 0; p < t.count; ++p) {
+    const std::size_t up = static_cast<std::size_t>(p);
+    budget = std::min(budget, problem.ln_bs[static_cast<std::size_t>(t.row[up])] - t.log_atoms[up]);
+  }
+  return budget;
+}
+
+// The highest ln mole fraction a trace species (below 1e-8) may rise to in one step: 1e-4 (RP-1311),
+// but for a species of a scarce element (whose amount allows less than mole fraction 1e-5) ten times
+// what that amount allows, and at most a factor e per step once above that. Without it one step could
+// put 10^5 times a trace element's atoms (1e-9 of the feed) into a species, and the iteration
+// oscillated to its limit ("He + 1e-9 H2S" at 1800 K).
+double scarce_element_ceiling(const TpProblem& problem, const Term& t, double lnN, double ln_fraction) {
+  const double budget = budget_ln_moles(problem, t) - lnN + kLn10;
+  if (budget >= kTraceCeilingLogFraction) return kTraceCeilingLogFraction;
+  return std::max(budget, ln_fraction + 1.0);
+}
+
 double step_length(const TpProblem& problem, const Iterate& iterate, double dlnN, std::vector<double>& mu) {
   double largest = 5.0 * std::abs(dlnN);
   double lambda2 = 1.0;
@@ -243,7 +265,8 @@ double step_length(const TpProblem& problem, const Iterate& iterate, double dlnN
     const double ln_fraction = iterate.lnn[j] - iterate.lnN;
     if (ln_fraction <= kTraceLogFraction) {
       const double rise = dj - dlnN;
-      if (rise > 0.0) lambda2 = std::min(lambda2, (kTraceCeilingLogFraction - ln_fraction) / rise);
+      const double ceiling = scarce_element_ceiling(problem, t, iterate.lnN, ln_fraction);
+      if (rise > 0.0) lambda2 = std::min(lambda2, (ceiling - ln_fraction) / rise);
     } else {
       largest = std::max(largest, dj);
     }

@@ -5,7 +5,7 @@
 #include "fuzz/fuzz_input.hpp"
 #include "stackbound/units/input_error.hpp"
 #include "stackbound/cases/case_file.hpp"
-#include "stackbound/cases/runner.hpp"
+#include "stackbound/cases/pipeline.hpp"
 #include "stackbound/cases/species_file.hpp"
 #include "stackbound/core/equilibrium.hpp"
 #include "stackbound/render/run_output.hpp"
