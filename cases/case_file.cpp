@@ -114,7 +114,7 @@ OperatingSpec operating_spec(const YamlField& op) {
   if (kind == "excess_air") {
     spec.mode = OperatingMode::excess_air;
     spec.value = value.quantity_si(Dimension::fraction);
-    if (!(spec.value > -0.75 && spec.value <= 10.0)) value.fail("must be between -75 % and 1000 %");
+    if (!(spec.value > -0.75 && spec.value <= 10.0)) value.fail("must be above -75 % (a mixture 4 times richer than stoichiometric) and at most 1000 %");
   } else if (kind == "lambda") {
     spec.mode = OperatingMode::lambda;
     spec.value = value.number();

@@ -231,9 +231,13 @@ void EquilibriumWork::add_candidates(EquilibriumSolver& solver, const std::vecto
 void EquilibriumWork::check_products(const EquilibriumSolver& solver, const std::vector<std::string>& candidates) {
   std::string listed;
   for (const std::string& name : candidates) listed += (listed.empty() ? "" : ",") + name;
+  if (solver.gas_count_ == 0 && candidates.empty()) {
+    throw units::InputError(fmt::format("feed: its elements ({}) form no gas species in the species data, and the "
+                                        "equilibrium needs a gas phase; add a gas to the feed (e.g. O2 or N2)",
+                                        element_list(solver.element_allowed_)));
+  }
   if (solver.gas_count_ == 0) {
-    throw units::InputError(fmt::format("species = \"{}\": the product list needs at least one gas species",
-                                        candidates.empty() ? std::string("(all)") : listed));
+    throw units::InputError(fmt::format("species = \"{}\": the product list needs at least one gas species", listed));
   }
   for (std::size_t k = 0; k < kElementCount; ++k) {
     if (!solver.element_allowed_[k]) continue;

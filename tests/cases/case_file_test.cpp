@@ -88,7 +88,7 @@ TEST(CaseFile, BrokenCasesFailWithLocatedMessagesAndNoOutputFile) {
       {"unknown unit", replaced(v, "100 Nm3/h", "100 Nm3/hour"), ":5:14: fuel.feed_rate = \"100 Nm3/hour\": unknown unit"},
       {"missing unit", replaced(v, "15 %", "15"), ":7:15: operating_point.excess_air = \"15\": a unit is required"},
       {"impossible excess air", replaced(v, "15 %", "-80 %"),
-       ":7:15: operating_point.excess_air = \"-80 %\": must be between -75 % and 1000 %"},
+       ":7:15: operating_point.excess_air = \"-80 %\": must be above -75 % (a mixture 4 times richer than stoichiometric) and at most 1000 %"},
       {"two operating modes", replaced(v, "  excess_air: 15 %\n", "  excess_air: 15 %\n  lambda: 1.2\n"),
        ":7:3: operating_point: has more than one of: excess_air, lambda, equivalence_ratio, flue_o2"},
       {"flue O2 above air", replaced(v, "  excess_air: 15 %", "  flue_o2: 25 %"),

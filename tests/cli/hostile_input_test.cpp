@@ -98,3 +98,37 @@ TEST(HostileInput, CommandLinePressuresAndRatesOutsideThePlausibleRangesAreRefus
 
 }  // namespace
 }  // namespace stackbound::cli
+
+namespace stackbound::cli {
+namespace {
+
+// Wrong if a feed of only C(gr) named an option (--species = "(all)") the user never gave.
+TEST(HostileInput, AFeedWithoutAnyGasSaysSoWithoutNamingAnOptionNotGiven) {
+  const auto run = testing::run_stackbound({"equilibrium", "--feed", "C(gr)", "--temperature", "1800K"});
+  EXPECT_EQ(run.exit_code, 2);
+  EXPECT_NE(run.err.find("feed: its elements (C) form no gas species in the species data, and the equilibrium needs "
+                         "a gas phase; add a gas to the feed (e.g. O2 or N2)"),
+            std::string::npos)
+      << run.err;
+  EXPECT_EQ(run.err.find("--species"), std::string::npos) << run.err;
+}
+
+// Wrong if the excess-air message contradicted itself ("-75 %: must be between -75 % and 1000 %").
+TEST(HostileInput, TheExcessAirBoundIsStatedAsExclusive) {
+  std::string name = (std::filesystem::temp_directory_path() / "stackbound_ea_XXXXXX").string();
+  const int descriptor = ::mkstemp(name.data());
+  ASSERT_GE(descriptor, 0);
+  ::close(descriptor);
+  std::ofstream(name) << "case:\n  title: t (invented)\nfuel:\n  preset: natural_gas\n  feed_rate: 100 Nm3/h\n"
+                         "operating_point:\n  excess_air: -75 %\nfiring:\n  temperature: 1800 K\n";
+  const auto run = testing::run_stackbound({"run", name});
+  std::filesystem::remove(name);
+  EXPECT_EQ(run.exit_code, 2);
+  EXPECT_NE(run.err.find(":7:15: operating_point.excess_air = \"-75 %\": must be above -75 % (a mixture 4 times "
+                         "richer than stoichiometric) and at most 1000 %"),
+            std::string::npos)
+      << run.err;
+}
+
+}  // namespace
+}  // namespace stackbound::cli

@@ -28,7 +28,6 @@ namespace {
 using stackbound::testing::is_close;
 
 constexpr double kAtm_Pa = units::kStandardAtmosphere_Pa;
-constexpr double kR = units::kGasConstant_J_per_mol_K;
 // The tool promises element balances to 1e-10 relative (issue 3).
 constexpr double kElementBalance = 1e-10;
 
