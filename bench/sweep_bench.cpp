@@ -34,7 +34,7 @@ void BM_SweepGasBoiler(benchmark::State& state) {
   for (auto _ : state) {
     double checksum = 0.0;
     failed += sb::run_sweep(base, vary, database, [&](const sb::SweepPoint& p) {
-      if (p.result) checksum += p.result->firing_temperature_K;
+      if (p.result) checksum += p.result->fired.temperature_K;
       ++points;
     });
     benchmark::DoNotOptimize(checksum);

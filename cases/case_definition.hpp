@@ -1,56 +1,56 @@
 #pragma once
-// A case as the case file states it, with every number already parsed into SI by the units layer.
-// Plain data: loading (case_file.hpp) fills it and reports located errors; the runner (runner.hpp)
-// turns it into a fuel, an oxidant, an operating point and the equilibrium problem. Sweeps change
-// fields of a copy. Field-by-field documentation: docs/case-file.md.
+// A case as the case file states it, every value parsed and checked when the file is loaded
+// (case_file.hpp): quantities in SI, choices as enums, measured values and stated limits as
+// concentrations and rates on their stated bases, the plant type as its reference-O2 preset. Plain
+// data: the run (pipeline.hpp) takes it as it is and never parses text; sweeps change fields of a copy.
+// Field-by-field documentation: docs/case-file.md.
 
 #include <optional>
 #include <string>
+#include <variant>
 #include <vector>
 
+#include "stackbound/core/fuel.hpp"
+#include "stackbound/emissions/concentration.hpp"
+#include "stackbound/emissions/limit_screening.hpp"
+#include "stackbound/emissions/pollutant.hpp"
+#include "stackbound/emissions/reference_correction.hpp"
+#include "stackbound/emissions/reference_o2_presets.hpp"
+#include "stackbound/units/normal_conditions.hpp"
 #include "stackbound/units/quantity_parser.hpp"
 
 namespace stackbound::cases {
-
-// Where a value came from, for errors raised after loading (e.g. a basis text parsed by the runner).
-struct SourceText {
-  std::string text;
-  std::string location;  // "file:line:column"
-  std::string path;      // field path, e.g. "stack.measured.co"
-};
 
 struct GasComponent {
   std::string formula;
   double percent = 0.0;
 };
 
+enum class FuelKind { preset, gas, ultimate, blend };
+
+struct BlendComponent;  // a FuelSpec and its fraction, below
+
 struct FuelSpec {
-  std::string name;                        // for reports; defaults to the preset name or "fuel"
-  std::string preset;                      // non-empty: a built-in fuel
-  std::vector<GasComponent> gas;           // non-empty: a gas by composition
-  std::string gas_basis = "mole";          // mole | mass
-  // Ultimate analysis in percent by mass (C, H, O, N, S, ash, moisture), on `ultimate_basis`:
-  // as_received sums to 100 with ash and moisture; dry sums to 100 with ash (moisture as received);
-  // dry_ash_free sums to 100 without ash and moisture (ash on the dry basis, moisture as received).
-  std::vector<GasComponent> ultimate;
-  std::string ultimate_basis = "as_received";  // as_received | dry | dry_ash_free
-  std::string state = "solid";                 // solid | liquid (ultimate analyses only)
-  std::optional<double> heating_value_J_per_kg;  // measured, on the analysis basis
-  std::string heating_value_basis = "HHV";     // HHV | LHV
-  std::string heating_value_correlation;       // instead of a measured value: channiwala_parikh | boie
-  std::optional<double> specific_heat_J_per_kg_K;  // of the as-fired liquid/solid fuel
-  std::string field = "fuel";                  // path in the file, for messages ("fuel.blend[1]")
-  std::string location;                        // "file:line:column" of this fuel's mapping
-  std::string kind_location;                   // of its preset / gas / ultimate / blend value
-  // Blend components and the fraction each takes (by `blend_by`), fractions summing to 1.
-  std::vector<std::pair<FuelSpec, double>> blend;
-  std::string blend_by = "mass";               // mass | mole | heat
+  FuelKind kind = FuelKind::preset;
+  std::string name;                     // as stated; empty: the preset's name, "gas fuel", "fuel" or "fuel blend"
+  std::string field = "fuel";           // path in the file ("fuel.blend[1]"), naming the fuel in errors
+  std::string preset;                   // kind preset: a built-in fuel
+  core::GasFuelSpec gas;                // kind gas: composition and basis (name and field filled in)
+  core::CondensedFuelSpec condensed;    // kind ultimate: analysis, state, heating value (name and field filled in)
+  // Kind blend: the components and the fraction each takes (by `blend_by`), fractions summing to 1.
+  // A vector of a type completed below: std::vector allows that, std::pair does not.
+  std::vector<BlendComponent> blend;
+  core::BlendBasis blend_by = core::BlendBasis::mass;
+};
+
+struct BlendComponent {
+  FuelSpec fuel;
+  double fraction = 0.0;
 };
 
 struct FuelFeedSpec {
   FuelSpec fuel;
   units::ParsedQuantity feed_rate;             // mass flow, molar flow (normal volume) or power
-  SourceText feed_rate_text;
   double temperature_K = 298.15;
 };
 
@@ -69,8 +69,10 @@ struct OperatingSpec {
   OperatingMode mode = OperatingMode::excess_air;
   double value = 0.0;                          // excess-air fraction, lambda, phi or O2 fraction
   bool flue_o2_dry = true;
-  std::string location;                        // of the value, for errors found when it is used
 };
+
+// The key of the operating point's value in the file ("operating_point.excess_air" ...).
+std::string_view operating_field(OperatingMode mode);
 
 struct FiringSpec {
   bool adiabatic = false;
@@ -78,15 +80,25 @@ struct FiringSpec {
   double heat_loss_fraction = 0.0;             // when adiabatic: fraction of the heat input lost
   double pressure_Pa = 101325.0;
   std::vector<std::string> species;            // product candidates; empty = all that fit
-  std::string location;                        // of the temperature (or of the section when adiabatic)
+};
+
+// A measured concentration as stated ("3.2 %, dry", "18 ppm, dry"), on its stated basis.
+struct MeasuredValue {
+  emissions::Concentration value;
+  std::string text;                            // as written, for the report
+};
+
+struct MeasuredFraction {
+  double fraction = 0.0;                       // moisture: H2O mole fraction of the wet gas
+  std::string text;
 };
 
 struct MeasuredSpec {
-  std::optional<SourceText> o2;                // e.g. "3.2 %, dry"
-  std::optional<SourceText> co;
-  std::optional<SourceText> no;
-  std::optional<SourceText> nox;
-  std::optional<SourceText> moisture;          // e.g. "17 %"
+  std::optional<MeasuredValue> o2;
+  std::optional<MeasuredValue> co;
+  std::optional<MeasuredValue> no;
+  std::optional<MeasuredValue> nox;
+  std::optional<MeasuredFraction> moisture;
 };
 
 struct StackSpec {
@@ -95,27 +107,31 @@ struct StackSpec {
   MeasuredSpec measured;
 };
 
+// A stated limit: a concentration on its basis ("100 mg/Nm3, dry, O2=3%") or a rate ("5 kg/h",
+// "0.1 lb/MMBtu"; never per useful output, which needs an efficiency a case does not state).
 struct LimitSpec {
-  std::string pollutant;
-  SourceText limit;                            // "100 mg/Nm3, dry, O2=3%", "0.1 lb/MMBtu", "5 kg/h"
+  std::string pollutant;                       // one of report.pollutants
+  std::string text;                            // as written, for the report
+  std::variant<emissions::Concentration, emissions::RateLimit> limit;
 };
 
 struct ReportSpec {
-  std::optional<double> reference_o2_fraction;  // nullopt: the preset for the plant type
-  double o2_basis_percent = 20.9;               // 20.9 (US EPA) or 21 (EU)
-  std::string normal_conditions = "0C";
-  std::vector<std::string> pollutants{"CO", "NO", "NOx"};
+  std::optional<double> reference_o2_fraction;  // nullopt: the plant type's preset
+  emissions::O2Basis o2_basis = emissions::O2Basis::us_epa_20_9;  // 20.9 % (US EPA) or 21 % (EU)
+  const units::NormalConditions* normal = &units::normal_0C();    // of mg/Nm3 figures and normal volumes
+  std::vector<emissions::Pollutant> pollutants{emissions::pollutant_by_name("CO", "report.pollutants"),
+                                               emissions::pollutant_by_name("NO", "report.pollutants"),
+                                               emissions::pollutant_by_name("NOx", "report.pollutants")};
   double operating_hours_h = 8760.0;
   std::vector<LimitSpec> limits;
-  std::string reference_o2_location;           // of report.reference_o2 (or the file)
 };
 
 struct CaseDefinition {
   std::string origin;                          // file name, for messages
   std::string title;
   std::string description;
-  std::string plant_type;                       // key of a reference-O2 preset, or empty
-  std::string plant_type_location;
+  std::string plant_type;                      // key of a reference-O2 preset, or empty
+  const emissions::ReferenceO2Preset* reference_o2_preset = nullptr;  // of plant_type; none when empty
   FuelFeedSpec fuel;
   AirSpec air;
   OperatingSpec operating;

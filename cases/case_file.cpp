@@ -1,22 +1,36 @@
 #include "stackbound/cases/case_file.hpp"
 
+#include <algorithm>
+#include <array>
 #include <cmath>
-#include <fstream>
-#include <sstream>
 
 #include <fmt/format.h>
 
 #include "stackbound/cases/fuel_spec.hpp"
+#include "stackbound/cases/input_file.hpp"
 #include "stackbound/cases/yaml_reader.hpp"
+#include "stackbound/emissions/basis.hpp"
 #include "stackbound/units/input_error.hpp"
 
 namespace stackbound::cases {
+
+namespace em = stackbound::emissions;
+
+std::string_view operating_field(OperatingMode mode) {
+  switch (mode) {
+    case OperatingMode::excess_air: return "operating_point.excess_air";
+    case OperatingMode::lambda: return "operating_point.lambda";
+    case OperatingMode::equivalence_ratio: return "operating_point.equivalence_ratio";
+    case OperatingMode::flue_o2: break;
+  }
+  return "operating_point.flue_o2";
+}
 
 namespace {
 
 using units::Dimension;
 
-SourceText source_text(const YamlField& field) { return {field.text(), field.location(), field.path()}; }
+constexpr std::array<std::string_view, 7> kSections{"case", "fuel", "air", "operating_point", "firing", "stack", "report"};
 
 double fraction_in(const YamlField& field, double low, double high, const char* rule) {
   const double fraction = field.quantity_si(Dimension::fraction);
@@ -38,13 +52,24 @@ std::vector<std::string> string_list(const YamlField& field) {
   return items;
 }
 
+// "35 ppm, dry, O2=3%" -> a concentration of `pollutant` on that basis (normal conditions, when the
+// text names none, those of the report).
+em::Concentration stated_concentration(const YamlField& field, const em::Pollutant& pollutant,
+                                       const units::NormalConditions& normal) {
+  return field.located([&] {
+    const std::string text = field.text();
+    const em::StatedValue stated = em::split_stated_value(text, field.path());
+    const em::Basis basis = em::parse_basis(stated.rest, field.path(), &normal);
+    return em::Concentration(stated.number, pollutant, basis, field.path());
+  });
+}
+
 FuelFeedSpec fuel_feed(const YamlField& fuel) {
   FuelFeedSpec feed;
   feed.fuel = read_fuel_spec(fuel, false);
   const YamlField rate = fuel.required("feed_rate");
   feed.feed_rate = rate.quantity({Dimension::mass_flow, Dimension::molar_flow, Dimension::power});
   if (feed.feed_rate.value_si <= 0.0) rate.fail("must be > 0");
-  feed.feed_rate_text = source_text(rate);
   if (const auto t = fuel.optional("temperature")) feed.temperature_K = temperature_K(*t);
   return feed;
 }
@@ -80,7 +105,6 @@ OperatingSpec operating_spec(const YamlField& op) {
   OperatingSpec spec;
   const std::string kind = op.one_of({"excess_air", "lambda", "equivalence_ratio", "flue_o2"});
   const YamlField value = op.required(kind);
-  spec.location = value.location();
   if (kind == "excess_air") {
     spec.mode = OperatingMode::excess_air;
     spec.value = value.quantity_si(Dimension::fraction);
@@ -107,7 +131,6 @@ OperatingSpec operating_spec(const YamlField& op) {
 FiringSpec firing_spec(const YamlField& firing) {
   firing.allow_only({"temperature", "adiabatic", "heat_loss", "pressure", "species"});
   FiringSpec spec;
-  spec.location = firing.location();
   if (const auto adiabatic = firing.optional("adiabatic")) spec.adiabatic = adiabatic->boolean();
   if (spec.adiabatic) {
     if (firing.has("temperature")) firing.fail("give either temperature or adiabatic: true, not both");
@@ -116,7 +139,6 @@ FiringSpec firing_spec(const YamlField& firing) {
     }
   } else {
     spec.temperature_K = temperature_K(firing.required("temperature"));
-    spec.location = firing.required("temperature").location();
     if (firing.has("heat_loss")) firing.required("heat_loss").fail("applies only with adiabatic: true");
   }
   if (const auto p = firing.optional("pressure")) spec.pressure_Pa = pressure_Pa(*p);
@@ -124,64 +146,124 @@ FiringSpec firing_spec(const YamlField& firing) {
   return spec;
 }
 
-StackSpec stack_spec(const std::optional<YamlField>& stack) {
+std::optional<MeasuredValue> measured_value(const YamlField& measured, std::string_view key, std::string_view pollutant,
+                                            const units::NormalConditions& normal) {
+  const auto field = measured.optional(key);
+  if (!field) return std::nullopt;
+  const em::Pollutant stated = em::pollutant_by_name(pollutant, field->path());
+  return MeasuredValue{stated_concentration(*field, stated, normal), field->text()};
+}
+
+MeasuredSpec measured_spec(const YamlField& measured, const units::NormalConditions& normal) {
+  measured.allow_only({"o2", "co", "no", "nox", "moisture"});
+  MeasuredSpec spec;
+  spec.o2 = measured_value(measured, "o2", "O2", normal);
+  spec.co = measured_value(measured, "co", "CO", normal);
+  spec.no = measured_value(measured, "no", "NO", normal);
+  spec.nox = measured_value(measured, "nox", "NOx", normal);
+  if (const auto v = measured.optional("moisture")) {
+    spec.moisture = MeasuredFraction{fraction_in(*v, 0.0, 0.99, "must be between 0 % and 99 %"), v->text()};
+  }
+  return spec;
+}
+
+StackSpec stack_spec(const std::optional<YamlField>& stack, const units::NormalConditions& normal) {
   StackSpec spec;
   if (!stack) return spec;
   stack->allow_only({"temperature", "pressure", "measured"});
   if (const auto t = stack->optional("temperature")) spec.temperature_K = temperature_K(*t);
   if (const auto p = stack->optional("pressure")) spec.pressure_Pa = pressure_Pa(*p);
-  if (const auto measured = stack->optional("measured")) {
-    measured->allow_only({"o2", "co", "no", "nox", "moisture"});
-    if (const auto v = measured->optional("o2")) spec.measured.o2 = source_text(*v);
-    if (const auto v = measured->optional("co")) spec.measured.co = source_text(*v);
-    if (const auto v = measured->optional("no")) spec.measured.no = source_text(*v);
-    if (const auto v = measured->optional("nox")) spec.measured.nox = source_text(*v);
-    if (const auto v = measured->optional("moisture")) {
-      spec.measured.moisture = source_text(*v);
-      (void)fraction_in(*v, 0.0, 0.99, "must be between 0 % and 99 %");
+  if (const auto measured = stack->optional("measured")) spec.measured = measured_spec(*measured, normal);
+  return spec;
+}
+
+// Read before the rest of the report: the measured values in `stack` are on its normal conditions.
+const units::NormalConditions& normal_conditions(const std::optional<YamlField>& report) {
+  const auto normal = report ? report->optional("normal_conditions") : std::nullopt;
+  if (!normal) return units::normal_0C();
+  const std::string key = normal->choice({"0C", "15C", "20C", "60F", "IED"});
+  return normal->located([&]() -> const units::NormalConditions& {
+    return units::normal_conditions_by_key(key, "report.normal_conditions");
+  });
+}
+
+// A concentration unit ("mg/Nm3", "ppm") makes a concentration limit; anything else is a rate.
+LimitSpec limit_spec(const YamlField& limit, const ReportSpec& report) {
+  limit.allow_only({"pollutant", "limit"});
+  const std::string pollutant = limit.required("pollutant").text();
+  const YamlField value = limit.required("limit");
+  const auto reported = std::find_if(report.pollutants.begin(), report.pollutants.end(),
+                                     [&](const em::Pollutant& p) { return p.name == pollutant; });
+  if (reported == report.pollutants.end()) {
+    std::vector<std::string> names;
+    for (const em::Pollutant& p : report.pollutants) names.push_back(p.name);
+    throw units::InputError(fmt::format("{}: report.limits: pollutant \"{}\" is not among report.pollutants ({})",
+                                        value.location(), pollutant, fmt::join(names, ", ")));
+  }
+  const std::string text = value.text();
+  const std::string rest = value.located([&] { return em::split_stated_value(text, value.path()).rest; });
+  const std::string unit = rest.substr(0, rest.find(','));
+  const auto first = unit.find_first_not_of(" \t");
+  const auto last = unit.find_last_not_of(" \t");
+  if (first != std::string::npos && em::find_concentration_unit(unit.substr(first, last - first + 1))) {
+    return {pollutant, text, stated_concentration(value, *reported, *report.normal)};
+  }
+  const em::RateLimit rate = value.located([&] { return em::parse_rate_limit(text, value.path()); });
+  if (rate.kind == em::RateKind::per_useful_output) {
+    value.fail("a limit per useful output needs an efficiency, which a case file does not state; give the limit as "
+               "a concentration, a mass rate or per heat input");
+  }
+  return {pollutant, text, rate};
+}
+
+// Reference O2: a stated value, or "preset" (the plant type's preset).
+std::optional<double> reference_o2(const YamlField& ref) {
+  if (ref.is_scalar() && ref.text() == "preset") return std::nullopt;
+  return fraction_in(ref, 0.0, 0.2, "must be 'preset' or an O2 between 0 % and 20 %");
+}
+
+ReportSpec report_spec(const YamlField& report) {
+  ReportSpec spec;
+  report.allow_only({"reference_o2", "o2_basis", "normal_conditions", "pollutants", "operating_hours", "limits"});
+  if (const auto ref = report.optional("reference_o2")) spec.reference_o2_fraction = reference_o2(*ref);
+  if (const auto basis = report.optional("o2_basis")) {
+    spec.o2_basis = basis->choice({"20.9", "21"}) == "21" ? em::O2Basis::eu_21 : em::O2Basis::us_epa_20_9;
+  }
+  spec.normal = &normal_conditions(report);
+  if (const auto pollutants = report.optional("pollutants")) {
+    const std::vector<std::string> names = string_list(*pollutants);
+    spec.pollutants.clear();
+    for (std::size_t i = 0; i < names.size(); ++i) {
+      const YamlField item = pollutants->is_sequence() ? pollutants->element(i) : *pollutants;
+      spec.pollutants.push_back(item.located([&] { return em::pollutant_by_name(names[i], "report.pollutants"); }));
     }
+  }
+  if (const auto hours = report.optional("operating_hours")) {
+    spec.operating_hours_h = hours->quantity_si(Dimension::time) / 3600.0;
+    if (!(spec.operating_hours_h > 0.0 && spec.operating_hours_h <= 8784.0)) hours->fail("must be between 0 h and 8784 h a year");
+  }
+  if (const auto limits = report.optional("limits")) {
+    if (!limits->is_sequence()) limits->fail("expected a list of {pollutant, limit}");
+    for (std::size_t i = 0; i < limits->size(); ++i) spec.limits.push_back(limit_spec(limits->element(i), spec));
   }
   return spec;
 }
 
-ReportSpec report_spec(const std::optional<YamlField>& report) {
-  ReportSpec spec;
-  if (!report) return spec;
-  report->allow_only({"reference_o2", "o2_basis", "normal_conditions", "pollutants", "operating_hours", "limits"});
-  if (const auto ref = report->optional("reference_o2")) {
-    spec.reference_o2_location = ref->location();
-    if (ref->is_scalar() && ref->text() == "preset") {
-      spec.reference_o2_fraction.reset();
-    } else {
-      spec.reference_o2_fraction = fraction_in(*ref, 0.0, 0.2, "must be 'preset' or an O2 between 0 % and 20 %");
-    }
-  }
-  if (const auto basis = report->optional("o2_basis")) spec.o2_basis_percent = basis->choice({"20.9", "21"}) == "21" ? 21.0 : 20.9;
-  if (const auto normal = report->optional("normal_conditions")) {
-    spec.normal_conditions = normal->choice({"0C", "15C", "20C", "60F", "IED"});
-  }
-  if (const auto pollutants = report->optional("pollutants")) spec.pollutants = string_list(*pollutants);
-  if (const auto hours = report->optional("operating_hours")) {
-    spec.operating_hours_h = hours->quantity_si(Dimension::time) / 3600.0;
-    if (!(spec.operating_hours_h > 0.0 && spec.operating_hours_h <= 8784.0)) hours->fail("must be between 0 h and 8784 h a year");
-  }
-  if (const auto limits = report->optional("limits")) {
-    if (!limits->is_sequence()) limits->fail("expected a list of {pollutant, limit}");
-    for (std::size_t i = 0; i < limits->size(); ++i) {
-      const YamlField limit = limits->element(i);
-      limit.allow_only({"pollutant", "limit"});
-      spec.limits.push_back({limit.required("pollutant").text(), source_text(limit.required("limit"))});
-    }
-  }
-  return spec;
+// "preset" (stated, or the default) needs a plant type with a reference-O2 preset.
+void check_reference_o2(const CaseDefinition& definition, const std::optional<YamlField>& report) {
+  if (definition.reference_o2_preset != nullptr || definition.report.reference_o2_fraction) return;
+  const std::string problem = "needs case.plant_type (a reference-O2 preset key) or an explicit O2, e.g. reference_o2: 3 %";
+  if (const auto ref = report ? report->optional("reference_o2") : std::nullopt) ref->fail(problem);
+  throw units::InputError(fmt::format("{}: report.reference_o2 = \"preset\": {}", definition.origin, problem));
 }
 
 }  // namespace
 
-CaseDefinition parse_case(std::string_view text, const std::string& origin) {
-  const YamlField root = YamlField::load(text, origin);
+LoadedCase parse_case_file(std::string_view text, const std::string& origin) {
+  LoadedCase loaded{CaseDefinition{}, SourceMap(origin)};
+  const YamlField root = YamlField::load(text, origin, &loaded.sources);
   root.allow_only({"case", "fuel", "air", "operating_point", "firing", "stack", "report"});
-  CaseDefinition definition;
+  CaseDefinition& definition = loaded.definition;
   definition.origin = origin;
   const YamlField info = root.required("case");
   info.allow_only({"title", "description", "plant_type"});
@@ -189,23 +271,32 @@ CaseDefinition parse_case(std::string_view text, const std::string& origin) {
   if (const auto description = info.optional("description")) definition.description = description->text();
   if (const auto plant = info.optional("plant_type")) {
     definition.plant_type = plant->text();
-    definition.plant_type_location = plant->location();
+    definition.reference_o2_preset =
+        plant->located([&] { return &em::reference_o2_preset(definition.plant_type, "case.plant_type"); });
   }
   definition.fuel = fuel_feed(root.required("fuel"));
   definition.air = air_spec(root.optional("air"));
   definition.operating = operating_spec(root.required("operating_point"));
   definition.firing = firing_spec(root.required("firing"));
-  definition.stack = stack_spec(root.optional("stack"));
-  definition.report = report_spec(root.optional("report"));
-  return definition;
+  const std::optional<YamlField> report = root.optional("report");
+  definition.stack = stack_spec(root.optional("stack"), normal_conditions(report));
+  if (report) definition.report = report_spec(*report);
+  check_reference_o2(definition, report);
+  // A section left out is the file's: errors about its defaults are reported at the file.
+  for (const std::string_view section : kSections) {
+    if (!loaded.sources.location_of(section)) loaded.sources.add(std::string(section), origin);
+  }
+  return loaded;
 }
 
-CaseDefinition load_case(const std::string& path) {
-  std::ifstream in(path);
-  if (!in) throw units::InputError(fmt::format("CASE = \"{}\": cannot open the case file", path));
-  std::ostringstream text;
-  text << in.rdbuf();
-  return parse_case(text.str(), path);
+LoadedCase load_case_file(const std::string& path) {
+  return parse_case_file(read_input_file(path, "CASE", "case file"), path);
 }
+
+CaseDefinition parse_case(std::string_view text, const std::string& origin) {
+  return parse_case_file(text, origin).definition;
+}
+
+CaseDefinition load_case(const std::string& path) { return load_case_file(path).definition; }
 
 }  // namespace stackbound::cases

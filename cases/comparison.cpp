@@ -18,7 +18,10 @@ std::optional<double> relative_difference(double value, double first) {
 
 Comparison compare(const std::vector<std::string>& files, const core::SpeciesDatabase& database) {
   Comparison comparison;
-  for (const std::string& file : files) comparison.runs.push_back(run_case(load_case(file), database));
+  for (const std::string& file : files) {
+    LoadedCase loaded = load_case_file(file);
+    comparison.runs.push_back(with_positions(loaded.sources, [&] { return run_case(std::move(loaded.definition), database); }));
+  }
   comparison.columns = run_metric_columns(comparison.runs.front());
   for (const RunResult& run : comparison.runs) comparison.values.push_back(run_metric_values(run));
   for (std::size_t i = 1; i < comparison.runs.size(); ++i) {
@@ -29,8 +32,9 @@ Comparison compare(const std::vector<std::string>& files, const core::SpeciesDat
       throw units::InputError(fmt::format("{}: report.pollutants must list the same pollutants as {} to compare them",
                                           comparison.runs[i].definition.origin, comparison.runs[0].definition.origin));
     }
-    if (comparison.runs[i].reference_o2_dry != comparison.runs[0].reference_o2_dry ||
-        comparison.runs[i].normal != comparison.runs[0].normal) {
+    const EmissionFigures& figures = comparison.runs[i].emissions;
+    const EmissionFigures& first = comparison.runs[0].emissions;
+    if (figures.reference_o2_dry != first.reference_o2_dry || figures.normal != first.normal) {
       comparison.flags.push_back(fmt::format(
           "{} uses a different reference O2 or normal conditions from {}: values 'at the reference O2' and in mg/Nm3 are "
           "on different bases; compare ppmvd, kg/h or lb/MMBtu instead.",
@@ -72,11 +76,11 @@ Report comparison_document(const Comparison& c) {
   report.tables.push_back(std::move(table));
   report.flags = c.flags;
   for (std::size_t i = 0; i < c.runs.size(); ++i) {
-    for (const std::string& finding : c.runs[i].findings) {
+    for (const std::string& finding : c.runs[i].screening.findings) {
       report.flags.push_back(fmt::format("Case {}: {}", static_cast<char>('A' + i), finding));
     }
   }
-  report.cautions = c.runs.front().cautions;
+  report.cautions = c.runs.front().screening.cautions;
   return report;
 }
 

@@ -8,7 +8,7 @@
 
 #include "stackbound/cases/report_document.hpp"
 #include "stackbound/cases/run_metrics.hpp"
-#include "stackbound/cases/runner.hpp"
+#include "stackbound/cases/pipeline.hpp"
 
 namespace stackbound::cases {
 
@@ -19,7 +19,8 @@ struct Comparison {
   std::vector<std::string> flags;
 };
 
-// Runs every case file; throws units::InputError when the cases list different pollutants.
+// Runs every case file (run errors reported at their file positions); throws units::InputError when
+// the cases list different pollutants.
 Comparison compare(const std::vector<std::string>& files, const core::SpeciesDatabase& database);
 
 // Relative difference against the first case; none when the first is zero.

@@ -1,12 +1,13 @@
 #include "stackbound/cases/fuel_file.hpp"
 
-#include <fstream>
-#include <sstream>
 #include <vector>
 
 #include <fmt/format.h>
 
 #include "stackbound/cases/fuel_spec.hpp"
+#include "stackbound/cases/input_file.hpp"
+#include "stackbound/cases/source_map.hpp"
+#include "stackbound/cases/yaml_reader.hpp"
 #include "stackbound/units/input_error.hpp"
 
 namespace stackbound::cases {
@@ -15,15 +16,14 @@ namespace {
 using units::Dimension;
 }  // namespace
 
-core::Fuel fuel_from_yaml(const YamlField& fuel, const core::SpeciesDatabase& database) {
-  return build_fuel(read_fuel_spec(fuel, false), database);
-}
-
 FuelFile parse_fuel_file(std::string_view text, const std::string& origin, const core::SpeciesDatabase& database) {
-  const YamlField root = YamlField::load(text, origin);
+  SourceMap sources(origin);
+  const YamlField root = YamlField::load(text, origin, &sources);
   root.allow_only({"fuel"});
   const YamlField fuel = root.required("fuel");
-  FuelFile file{fuel_from_yaml(fuel, database), std::nullopt, "", std::nullopt};
+  const FuelSpec spec = read_fuel_spec(fuel, false);
+  // What the species data refuse is reported at the position of the field concerned.
+  FuelFile file{with_positions(sources, [&] { return build_fuel(spec, database); }), std::nullopt, "", std::nullopt};
   if (const auto rate = fuel.optional("feed_rate")) {
     file.feed_rate = rate->quantity({Dimension::mass_flow, Dimension::molar_flow, Dimension::power});
     file.feed_rate_text = rate->text();
@@ -34,11 +34,7 @@ FuelFile parse_fuel_file(std::string_view text, const std::string& origin, const
 }
 
 FuelFile read_fuel_file(const std::string& path, const core::SpeciesDatabase& database) {
-  std::ifstream in(path);
-  if (!in) throw units::InputError(fmt::format("FILE = \"{}\": cannot open the fuel file", path));
-  std::ostringstream text;
-  text << in.rdbuf();
-  return parse_fuel_file(text.str(), path, database);
+  return parse_fuel_file(read_input_file(path, "FILE", "fuel file"), path, database);
 }
 
 }  // namespace stackbound::cases

@@ -8,7 +8,6 @@
 #include <string>
 #include <string_view>
 
-#include "stackbound/cases/yaml_reader.hpp"
 #include "stackbound/core/fuel.hpp"
 #include "stackbound/core/species_database.hpp"
 #include "stackbound/units/quantity_parser.hpp"
@@ -21,10 +20,6 @@ struct FuelFile {
   std::string feed_rate_text;                      // as written, with its location
   std::optional<double> temperature_K;             // fuel temperature at the burner
 };
-
-// Builds the fuel described by a `fuel:` mapping (without feed_rate/temperature, which the caller
-// reads). Throws units::InputError with the file location.
-core::Fuel fuel_from_yaml(const YamlField& fuel, const core::SpeciesDatabase& database);
 
 // Parses fuel-file text; `origin` is the file name used in messages.
 FuelFile parse_fuel_file(std::string_view text, const std::string& origin, const core::SpeciesDatabase& database);

@@ -1,8 +1,7 @@
 #pragma once
-// The `fuel:` mapping of case files and fuel files: read into a FuelSpec (plain data, so sweeps can
-// change a blend fraction), then built into a core::Fuel. Keys: docs/case-file.md, section `fuel`.
-
-#include <string>
+// The `fuel:` mapping of case files and fuel files: read and checked into a FuelSpec (plain data, so
+// sweeps can change a blend fraction), then built into a core::Fuel by the resolve stage. Keys:
+// docs/case-file.md, section `fuel`.
 
 #include "stackbound/cases/case_definition.hpp"
 #include "stackbound/cases/yaml_reader.hpp"
@@ -16,7 +15,8 @@ namespace stackbound::cases {
 // caller). Throws units::InputError with file, line and column.
 FuelSpec read_fuel_spec(const YamlField& fuel, bool blend_part);
 
-// Builds the fuel; errors from the core layer are prefixed with the location of the offending node.
+// Builds the fuel. What the species data refuse (an unknown species or preset, percentages that do
+// not sum to 100 %) is an InputError naming the field path ("fuel.gas: ..."; source_map.hpp).
 core::Fuel build_fuel(const FuelSpec& spec, const core::SpeciesDatabase& database);
 
 }  // namespace stackbound::cases

@@ -1,8 +1,9 @@
 #pragma once
-// The last stage of a run: its result as a report document (rendered by render/).
+// The last stage of a run (pipeline.hpp), document: its result as a report document (rendered by
+// render/).
 
+#include "stackbound/cases/pipeline.hpp"
 #include "stackbound/cases/report_document.hpp"
-#include "stackbound/cases/runner.hpp"
 
 namespace stackbound::cases {
 

@@ -6,17 +6,18 @@
 
 namespace stackbound::cases {
 
-std::vector<MetricColumn> run_metric_columns(const RunResult& r) {
-  const std::string ref = fmt::format("@ {} % O2", emissions::percent_text(r.reference_o2_dry));
+std::vector<MetricColumn> run_metric_columns(const RunResult& r, bool reference_o2_varies) {
+  const std::string ref = reference_o2_varies ? std::string("@ reference O2")
+                                              : fmt::format("@ {} % O2", emissions::percent_text(r.emissions.reference_o2_dry));
   std::vector<MetricColumn> columns = {
       {"firing_temperature_K", "firing temperature [K]"},
       {"excess_air_percent", "excess air [%]"},
       {"flue_o2_dry_percent", "flue O2 [% dry]"},
       {"moisture_percent", "flue H2O [% wet]"},
       {"heat_input_MW", "heat input [MW HHV]"},
-      {"stack_flow_wet_Nm3_per_h", fmt::format("stack flow [Nm3/h wet, {}]", r.normal->key)},
+      {"stack_flow_wet_Nm3_per_h", fmt::format("stack flow [Nm3/h wet, {}]", r.emissions.normal->key)},
   };
-  for (const PollutantBound& p : r.pollutants) {
+  for (const PollutantBound& p : r.emissions.pollutants) {
     columns.push_back({p.name + "_ppmvd", p.name + " bound [ppmvd]"});
     columns.push_back({p.name + "_ppmvd_at_ref_o2", fmt::format("{} bound [ppmvd {}]", p.name, ref)});
     columns.push_back({p.name + "_mg_per_Nm3_at_ref_o2", fmt::format("{} bound [mg/Nm3 {}]", p.name, ref)});
@@ -28,14 +29,14 @@ std::vector<MetricColumn> run_metric_columns(const RunResult& r) {
 
 std::vector<double> run_metric_values(const RunResult& r) {
   std::vector<double> values = {
-      r.firing_temperature_K,
-      r.combustion.excess_air() * 100.0,
-      r.stack_o2_dry * 100.0,
-      r.stack_h2o_wet * 100.0,
-      r.rates.feed.heat_input_hhv_W / 1e6,
-      r.stack_wet_mol_per_s * r.normal->molar_volume_m3_per_mol() * 3600.0,
+      r.fired.temperature_K,
+      r.resolved.combustion.excess_air() * 100.0,
+      r.stack.o2_dry * 100.0,
+      r.stack.h2o_wet * 100.0,
+      r.resolved.rates.feed.heat_input_hhv_W / 1e6,
+      r.stack.wet_mol_per_s * r.emissions.normal->molar_volume_m3_per_mol() * 3600.0,
   };
-  for (const PollutantBound& p : r.pollutants) {
+  for (const PollutantBound& p : r.emissions.pollutants) {
     const emissions::StackEmission& e = p.emission;
     values.push_back(e.ppmvd.value());
     values.push_back(e.ppmvd_at_reference.value());

@@ -5,7 +5,7 @@
 #include <string>
 #include <vector>
 
-#include "stackbound/cases/runner.hpp"
+#include "stackbound/cases/pipeline.hpp"
 
 namespace stackbound::cases {
 
@@ -15,8 +15,9 @@ struct MetricColumn {
 };
 
 // Firing temperature, excess air, flue O2 and moisture, heat input, stack flow, then for each
-// pollutant ppmvd, ppmvd and mg/Nm3 at the reference O2, kg/h and lb/MMBtu.
-std::vector<MetricColumn> run_metric_columns(const RunResult& result);
+// pollutant ppmvd, ppmvd and mg/Nm3 at the reference O2, kg/h and lb/MMBtu. The headers name the
+// run's reference O2, or "the reference O2" when `reference_o2_varies` (a sweep of it).
+std::vector<MetricColumn> run_metric_columns(const RunResult& result, bool reference_o2_varies = false);
 
 // The values of those columns, in the same order.
 std::vector<double> run_metric_values(const RunResult& result);

@@ -1,11 +1,10 @@
 #include "stackbound/cases/species_file.hpp"
 
-#include <fstream>
-#include <sstream>
 
 #include <fmt/format.h>
 #include <yaml-cpp/yaml.h>
 
+#include "stackbound/cases/input_file.hpp"
 #include "stackbound/units/input_error.hpp"
 
 namespace stackbound::cases {
@@ -118,11 +117,7 @@ std::vector<core::Species> parse_species_yaml(std::string_view text, std::string
 }
 
 std::vector<core::Species> read_species_file(const std::string& path) {
-  std::ifstream in(path);
-  if (!in) throw units::InputError(fmt::format("--species-file = \"{}\": cannot open the file", path));
-  std::ostringstream text;
-  text << in.rdbuf();
-  return parse_species_yaml(text.str(), path);
+  return parse_species_yaml(read_input_file(path, "--species-file", "species file"), path);
 }
 
 const core::SpeciesDatabase& builtin_species() {

@@ -8,8 +8,6 @@
 
 #include <fmt/format.h>
 
-#include "stackbound/cases/fuel_spec.hpp"
-#include "stackbound/core/equilibrium.hpp"
 #include "stackbound/units/input_error.hpp"
 #include "stackbound/units/nearest_name.hpp"
 #include "stackbound/units/quantity_parser.hpp"
@@ -20,9 +18,10 @@ namespace {
 
 using units::Dimension;
 
-constexpr std::array<std::string_view, 9> kNames{"excess_air",    "flue_o2",  "firing_temperature",
-                                                 "heat_loss",     "air_preheat", "humidity",
-                                                 "o2_enrichment", "pressure", "blend_fraction"};
+constexpr std::array<std::string_view, 10> kNames{"excess_air",    "flue_o2",  "firing_temperature",
+                                                  "heat_loss",     "air_preheat", "humidity",
+                                                  "o2_enrichment", "pressure", "blend_fraction",
+                                                  "reference_o2"};
 
 Dimension dimension_of(SweepParameter parameter) {
   switch (parameter) {
@@ -40,6 +39,22 @@ Dimension dimension_of(SweepParameter parameter) {
 }  // namespace
 
 std::span<const std::string_view> sweep_parameter_names() { return kNames; }
+
+Stage first_stage_reading(SweepParameter parameter) {
+  switch (parameter) {
+    case SweepParameter::excess_air:
+    case SweepParameter::flue_o2:
+    case SweepParameter::air_preheat:
+    case SweepParameter::humidity:
+    case SweepParameter::o2_enrichment:
+    case SweepParameter::blend_fraction: return Stage::resolve;
+    case SweepParameter::firing_temperature:
+    case SweepParameter::heat_loss:
+    case SweepParameter::pressure: return Stage::fire;
+    case SweepParameter::reference_o2: return Stage::emissions;
+  }
+  return Stage::resolve;
+}
 
 std::string_view sweep_parameter_name(SweepParameter parameter) { return kNames[static_cast<std::size_t>(parameter)]; }
 
@@ -142,14 +157,20 @@ void apply_parameter(CaseDefinition& definition, SweepParameter parameter, doubl
       }
       // The first component takes `value`; the others keep their proportions in the rest.
       double others = 0.0;
-      for (std::size_t i = 1; i < blend.size(); ++i) others += blend[i].second;
+      for (std::size_t i = 1; i < blend.size(); ++i) others += blend[i].fraction;
       for (std::size_t i = 1; i < blend.size(); ++i) {
-        blend[i].second = others > 0.0 ? blend[i].second / others * (1.0 - value)
-                                       : (1.0 - value) / static_cast<double>(blend.size() - 1);
+        blend[i].fraction = others > 0.0 ? blend[i].fraction / others * (1.0 - value)
+                                         : (1.0 - value) / static_cast<double>(blend.size() - 1);
       }
-      blend[0].second = value;
+      blend[0].fraction = value;
       break;
     }
+    case SweepParameter::reference_o2:
+      if (!(value >= 0.0 && value <= 0.2)) {
+        throw units::InputError(fmt::format("--vary reference_o2 = {:.6g} %: must be between 0 % and 20 %", value * 100.0));
+      }
+      definition.report.reference_o2_fraction = value;
+      break;
   }
 }
 
@@ -198,39 +219,42 @@ std::vector<double> values_at(const std::vector<VarySpec>& vary, std::size_t ind
   return values;
 }
 
-// One worker's state between its points: the previous equilibrium (warm start), the solver, and the
-// fuel, built once when no point changes it.
+// One worker's state between its points: its last point with a result (in the current batch, or
+// `kept` across batches), whose stage results the next point keeps where it may.
 struct WorkerState {
-  const core::EquilibriumResult* previous = nullptr;  // the worker's last result (owned by a batch or `kept`)
-  std::optional<core::EquilibriumResult> kept;        // the last result of the previous batch
-  std::shared_ptr<const core::EquilibriumSolver> solver;
-  std::array<bool, core::kElementCount> solver_elements{};
-  std::optional<core::Fuel> fuel;
+  const SweepPoint* previous = nullptr;
+  std::optional<SweepPoint> kept;
 };
 
+// How a point runs after `previous`: from the first stage reading a parameter whose value changed,
+// keeping the fuel unless the blend changed.
+RunOptions point_options(const std::vector<VarySpec>& vary, const SweepPoint& point, const SweepPoint* previous) {
+  RunOptions options;
+  options.record_factors = false;
+  options.full_report = false;
+  if (previous == nullptr) return options;
+  options.previous = &*previous->result;
+  options.rerun_from = Stage::screening;
+  options.keep_fuel = true;
+  for (std::size_t k = 0; k < vary.size(); ++k) {
+    if (point.values[k] == previous->values[k]) continue;
+    options.rerun_from = std::min(options.rerun_from, first_stage_reading(vary[k].parameter));
+    if (vary[k].parameter == SweepParameter::blend_fraction) options.keep_fuel = false;
+  }
+  // A repeated point (no change) still computes its figures.
+  options.rerun_from = std::min(options.rerun_from, Stage::emissions);
+  return options;
+}
+
 void run_point(const CaseDefinition& base, const std::vector<VarySpec>& vary, const core::SpeciesDatabase& database,
-               SweepPoint& point, WorkerState& state) {
+               const SourceMap* sources, SweepPoint& point, WorkerState& state) {
   try {
     CaseDefinition definition = base;
-    bool fuel_varied = false;
-    for (std::size_t k = 0; k < vary.size(); ++k) {
-      apply_parameter(definition, vary[k].parameter, point.values[k]);
-      fuel_varied = fuel_varied || vary[k].parameter == SweepParameter::blend_fraction;
-    }
-    if (!fuel_varied && !state.fuel) state.fuel = build_fuel(definition.fuel.fuel, database);
-    RunOptions options;
-    options.record_factors = false;
-    options.full_report = false;
-    options.fuel = fuel_varied ? nullptr : &*state.fuel;
-    options.warm_start = state.previous;
-    options.solver = state.solver;
-    options.solver_elements = state.solver_elements;
-    point.result = run_case(std::move(definition), database, options);
-    state.previous = &point.result->equilibrium;
-    state.solver = point.result->solver;
-    state.solver_elements = point.result->solver_elements;
+    for (std::size_t k = 0; k < vary.size(); ++k) apply_parameter(definition, vary[k].parameter, point.values[k]);
+    point.result = run_case(std::move(definition), database, point_options(vary, point, state.previous));
+    state.previous = &point;
   } catch (const std::exception& error) {
-    point.error = error.what();
+    point.error = sources != nullptr ? sources->locate(error.what()) : error.what();
   }
 }
 
@@ -260,8 +284,8 @@ std::size_t run_sweep(const CaseDefinition& base, const std::vector<VarySpec>& v
       if (begin >= end) break;
       workers.emplace_back([&, t, begin, end] {
         WorkerState& state = workers_state[t];
-        for (std::size_t i = begin; i < end; ++i) run_point(base, vary, database, batch[i], state);
-        // The batch is handed to the sink next: keep a copy of the last result for the next batch.
+        for (std::size_t i = begin; i < end; ++i) run_point(base, vary, database, options.sources, batch[i], state);
+        // The batch is handed to the sink next: keep a copy of the last point for the next batch.
         if (state.previous != nullptr && !(state.kept && state.previous == &*state.kept)) {
           state.kept = *state.previous;
           state.previous = &*state.kept;

@@ -1,18 +1,23 @@
 #pragma once
-// Sweeps: the cartesian grid of one or more case parameters, each point a full case run.
-// Points run in order along the grid (the last --vary changes fastest), each warm-started from the
-// previous point of its worker; workers take contiguous slices of fixed-size batches, and the batch
-// is handed to the sink in grid order before the next starts, so memory does not grow with the
-// number of points. A point that fails is reported with its parameters and the sweep goes on.
+// Sweeps: the cartesian grid of one or more case parameters, each point a run of the case's pipeline
+// (pipeline.hpp) without the screening stage. Points run in order along the grid (the last --vary
+// changes fastest); each point re-runs only the stages that read a parameter changed since the
+// previous point of its worker and keeps that point's other stage results (a reference-O2 step needs
+// no new equilibrium), and its fire stage starts from the previous equilibrium. Workers take
+// contiguous slices of fixed-size batches, and the batch is handed to the sink in grid order before
+// the next starts, so memory does not grow with the number of points. A point that fails is reported
+// with its parameters and the sweep goes on.
 
 #include <functional>
 #include <optional>
+#include <span>
 #include <string>
 #include <string_view>
 #include <vector>
 
 #include "stackbound/cases/case_definition.hpp"
-#include "stackbound/cases/runner.hpp"
+#include "stackbound/cases/pipeline.hpp"
+#include "stackbound/cases/source_map.hpp"
 #include "stackbound/core/species_database.hpp"
 
 namespace stackbound::cases {
@@ -27,7 +32,12 @@ enum class SweepParameter {
   o2_enrichment,
   pressure,
   blend_fraction,
+  reference_o2,
 };
+
+// The first stage that reads a parameter: a point that changes only parameters read from stage N on
+// keeps the previous point's results of the stages before N.
+Stage first_stage_reading(SweepParameter parameter);
 
 // The parameter names accepted by --vary, in this order.
 std::span<const std::string_view> sweep_parameter_names();
@@ -50,7 +60,8 @@ struct VarySpec {
 VarySpec parse_vary(std::string_view text);
 
 // Sets one parameter of a copy of the case; throws units::InputError where the case cannot take it
-// (heat_loss on a case with a stated firing temperature, blend_fraction on a single fuel).
+// (heat_loss on a case with a stated firing temperature, blend_fraction on a single fuel, a reference
+// O2 outside 0-20 %).
 void apply_parameter(CaseDefinition& definition, SweepParameter parameter, double value_si);
 
 // Checks that every parameter can be applied to the case (before any point runs).
@@ -59,7 +70,8 @@ void check_sweep(const CaseDefinition& definition, const std::vector<VarySpec>& 
 struct SweepPoint {
   std::size_t index = 0;
   std::vector<double> values;          // SI, one per VarySpec
-  std::optional<RunResult> result;     // empty when the point failed
+  std::optional<RunResult> result;     // empty when the point failed; result->stages_run tells which
+                                       // stages ran for this point (the others were kept)
   std::string error;                   // why it failed
 };
 
@@ -71,6 +83,9 @@ struct SweepOptions {
   std::size_t batch_points = 512;     // points held in memory at once
   // Called after each batch with the number of points done so far.
   std::function<void(std::size_t done, std::size_t total)> progress;
+  // Where the case's fields were written (LoadedCase::sources): errors of a point name their field's
+  // file position instead of its path. Not owned; nullptr keeps the paths.
+  const SourceMap* sources = nullptr;
 };
 
 // Runs the grid; `sink` receives every point once, in grid order. Returns the number of failed points.

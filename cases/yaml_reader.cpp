@@ -9,13 +9,13 @@
 
 namespace stackbound::cases {
 
-YamlField::YamlField(YAML::Node node, std::string origin, std::string path)
-    : node_(std::move(node)), origin_(std::move(origin)), path_(std::move(path)) {}
+YamlField::YamlField(YAML::Node node, std::string origin, std::string path, SourceMap* sources)
+    : node_(std::move(node)), origin_(std::move(origin)), path_(std::move(path)), sources_(sources) {}
 
-YamlField YamlField::load(std::string_view text, const std::string& origin) {
+YamlField YamlField::load(std::string_view text, const std::string& origin, SourceMap* sources) {
   try {
     YAML::Node root = YAML::Load(std::string(text));
-    YamlField field(root, origin, "");
+    YamlField field(root, origin, "", sources);
     if (!root.IsMap()) {
       throw units::InputError(fmt::format("{}:1:1: the case file must be a YAML mapping of sections (case, fuel, air, "
                                           "operating_point, firing, stack, report)",
@@ -26,6 +26,12 @@ YamlField YamlField::load(std::string_view text, const std::string& origin) {
     throw units::InputError(
         fmt::format("{}:{}:{}: not valid YAML: {}", origin, error.mark.line + 1, error.mark.column + 1, error.msg));
   }
+}
+
+YamlField YamlField::child(YAML::Node node, std::string path) const {
+  YamlField field(std::move(node), origin_, std::move(path), sources_);
+  if (sources_ != nullptr) sources_->add(field.path_, field.location());
+  return field;
 }
 
 bool YamlField::has(std::string_view key) const { return node_.IsMap() && node_[std::string(key)].IsDefined(); }
@@ -74,19 +80,19 @@ std::string YamlField::one_of(std::initializer_list<std::string_view> keys) cons
 YamlField YamlField::required(std::string_view key) const {
   if (!node_.IsMap()) fail("expected a mapping of keys");
   if (!has(key)) fail(fmt::format("missing required key \"{}\"", key));
-  return YamlField(node_[std::string(key)], origin_, path_.empty() ? std::string(key) : path_ + "." + std::string(key));
+  return child(node_[std::string(key)], path_.empty() ? std::string(key) : path_ + "." + std::string(key));
 }
 
 std::optional<YamlField> YamlField::optional(std::string_view key) const {
   if (!has(key)) return std::nullopt;
-  const YAML::Node child = node_[std::string(key)];
-  if (child.IsNull()) return std::nullopt;
-  return YamlField(child, origin_, path_.empty() ? std::string(key) : path_ + "." + std::string(key));
+  const YAML::Node node = node_[std::string(key)];
+  if (node.IsNull()) return std::nullopt;
+  return this->child(node, path_.empty() ? std::string(key) : path_ + "." + std::string(key));
 }
 
 YamlField YamlField::element(std::size_t index) const {
   if (!node_.IsSequence()) fail("expected a list");
-  return YamlField(node_[index], origin_, fmt::format("{}[{}]", path_, index));
+  return child(node_[index], fmt::format("{}[{}]", path_, index));
 }
 
 std::vector<std::pair<std::string, YamlField>> YamlField::entries() const {
@@ -94,7 +100,7 @@ std::vector<std::pair<std::string, YamlField>> YamlField::entries() const {
   std::vector<std::pair<std::string, YamlField>> result;
   for (const auto& entry : node_) {
     const std::string key = entry.first.as<std::string>();
-    result.emplace_back(key, YamlField(entry.second, origin_, path_.empty() ? key : path_ + "." + key));
+    result.emplace_back(key, child(entry.second, path_.empty() ? key : path_ + "." + key));
   }
   return result;
 }

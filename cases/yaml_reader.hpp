@@ -2,7 +2,8 @@
 // Reading a case file with located errors. A YamlField wraps one YAML node with the file it came
 // from and its field path ("fuel.feed_rate"); every error it raises reads
 //   boiler.yaml:14:18: operating_point.excess_air = "-5 %": must be >= 0 %
-// Unknown keys are refused with the nearest valid key suggested.
+// Unknown keys are refused with the nearest valid key suggested. A document loaded with a SourceMap
+// records there the position of every field read from it, for errors found later (source_map.hpp).
 
 #include <initializer_list>
 #include <optional>
@@ -12,6 +13,7 @@
 
 #include <yaml-cpp/yaml.h>
 
+#include "stackbound/cases/source_map.hpp"
 #include "stackbound/units/input_error.hpp"
 #include "stackbound/units/quantity_parser.hpp"
 
@@ -19,10 +21,11 @@ namespace stackbound::cases {
 
 class YamlField {
  public:
-  YamlField(YAML::Node node, std::string origin, std::string path);
+  YamlField(YAML::Node node, std::string origin, std::string path, SourceMap* sources = nullptr);
 
-  // Parses a whole document; YAML syntax errors become InputError with file:line:column.
-  static YamlField load(std::string_view text, const std::string& origin);
+  // Parses a whole document; YAML syntax errors become InputError with file:line:column. With
+  // `sources`, every field read through the result (and its children) is recorded there.
+  static YamlField load(std::string_view text, const std::string& origin, SourceMap* sources = nullptr);
 
   [[nodiscard]] const std::string& path() const { return path_; }
   [[nodiscard]] const std::string& origin() const { return origin_; }
@@ -55,25 +58,25 @@ class YamlField {
   // Throws InputError "<location>: <path> = "<value>": <problem>" (value omitted for non-scalars).
   [[noreturn]] void fail(const std::string& problem) const;
 
+  // Runs `parse` (a parser of another layer, which names the field but knows no file); an InputError
+  // it throws is rethrown with this field's location in front.
+  template <typename Parse>
+  auto located(Parse&& parse) const -> decltype(parse()) {
+    try {
+      return parse();
+    } catch (const units::InputError& error) {
+      throw units::InputError(location() + ": " + error.what());
+    }
+  }
+
  private:
+  // A child field, recorded in sources_.
+  [[nodiscard]] YamlField child(YAML::Node node, std::string path) const;
+
   YAML::Node node_;
   std::string origin_;
   std::string path_;
+  SourceMap* sources_ = nullptr;  // the loading caller's record of positions; not owned
 };
-
-// Runs `step`; an InputError it throws (from a layer that knows field names but not file positions)
-// is rethrown with `location` ("file:line:column") in front, unless it already starts with that
-// file's name or no location is known.
-template <typename Step>
-auto with_location(const std::string& location, Step&& step) -> decltype(step()) {
-  try {
-    return step();
-  } catch (const units::InputError& error) {
-    const std::string message = error.what();
-    const std::string file = location.substr(0, location.find(':'));
-    if (location.empty() || message.rfind(file, 0) == 0) throw;
-    throw units::InputError(location + ": " + message);
-  }
-}
 
 }  // namespace stackbound::cases

@@ -3,6 +3,7 @@
 
 #include "stackbound/cases/comparison.hpp"
 #include "stackbound/cases/species_file.hpp"
+#include "stackbound/render/finite_figures.hpp"
 #include "stackbound/cli/commands.hpp"
 #include "stackbound/render/comparison_json.hpp"
 #include "stackbound/render/report_renderers.hpp"
@@ -26,7 +27,7 @@ void add_compare_command(CLI::App& app, const GlobalOptions& global) {
   CLI::App* command = app.add_subcommand("compare", "Compare two or more cases side by side");
   command->footer(
       "Examples:\n"
-      "  stackbound compare cases/examples/gas_boiler.yaml cases/examples/oil_heater.yaml\n"
+      "  stackbound compare cases/examples/gas_boiler.yaml cases/examples/wood_chip_boiler.yaml\n"
       "  stackbound compare base.yaml low_excess_air.yaml --format html --output compare.html\n"
       "Differences are against the first case: absolute, and relative in %.");
   command->add_option("CASES", cli->case_files, "Two or more case files (YAML)")->required()->expected(2, 26);
@@ -36,7 +37,7 @@ void add_compare_command(CLI::App& app, const GlobalOptions& global) {
     const core::SpeciesDatabase database = species_database(global.species_file);
     const Comparison comparison = compare(cli->case_files, database);
     write_output(cli->output, cli->format == "json"
-                                  ? render::comparison_json(comparison).dump(2) + "\n"
+                                  ? render::json_text(render::comparison_json(comparison))
                                   : render::render_report(cases::comparison_document(comparison), cli->format));
   });
 }

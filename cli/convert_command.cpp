@@ -12,6 +12,7 @@
 
 #include <nlohmann/json.hpp>
 
+#include "stackbound/render/finite_figures.hpp"
 #include "stackbound/cli/commands.hpp"
 #include "stackbound/emissions/basis.hpp"
 #include "stackbound/emissions/cautions.hpp"
@@ -193,7 +194,7 @@ void run(const ConvertOptions& options) {
         {"factors", factors},
         {"presets", preset_list},
         {"cautions", caution_list}};
-    write_output(options.output, out.dump(2) + "\n");
+    write_output(options.output, render::json_text(out));
     return;
   }
 

@@ -1,4 +1,4 @@
-// `stackbound equilibrium --feed "CH4=1, O2=2.4, N2=9.03" (--temperature 1800K | --adiabatic) ...`:
+// `stackbound equilibrium --feed "CH4 + 2.4 O2 + 9.03 N2" (--temperature 1800K | --adiabatic) ...`:
 // chemical equilibrium of a feed of database species at fixed T and P, or at the adiabatic flame
 // temperature (core/equilibrium.hpp, core/adiabatic_flame.hpp).
 
@@ -9,9 +9,11 @@
 #include <nlohmann/json.hpp>
 #include <numeric>
 
+#include "stackbound/render/finite_figures.hpp"
 #include "stackbound/cli/commands.hpp"
 #include "stackbound/cases/species_file.hpp"
 #include "stackbound/core/adiabatic_flame.hpp"
+#include "stackbound/core/composition_notation.hpp"
 #include "stackbound/core/element_amounts.hpp"
 #include "stackbound/core/equilibrium.hpp"
 #include "stackbound/units/constants.hpp"
@@ -41,32 +43,6 @@ struct EquilibriumOptions {
   std::string output;
   bool all = false;
 };
-
-// "CH4=1, O2=2.4, N2=9.03" -> species amounts in mol ("CH4=1 kmol" is accepted too).
-std::vector<core::SpeciesAmount> parse_feed(std::string_view text) {
-  std::vector<core::SpeciesAmount> feed;
-  for (const std::string& item : split_list(text, "--feed")) {
-    const std::size_t equals = item.find('=');
-    if (equals == std::string::npos) {
-      throw units::InputError(fmt::format(
-          "--feed = \"{}\": expected NAME=AMOUNT (moles of a database species), e.g. \"CH4=1, O2=2, N2=7.52\"", item));
-    }
-    std::string name = item.substr(0, equals);
-    name.erase(name.find_last_not_of(" \t") + 1);
-    const std::string amount_text = item.substr(equals + 1);
-    if (name.empty()) {
-      throw units::InputError(fmt::format("--feed = \"{}\": the species name before '=' is missing", item));
-    }
-    const std::string field = fmt::format("--feed {}", name);
-    const double moles =
-        units::parse_quantity(amount_text, field, {units::Dimension::dimensionless, units::Dimension::amount}).value_si;
-    if (moles < 0.0) {
-      throw units::InputError(fmt::format("--feed = \"{}\": the amount must be >= 0 mol", item));
-    }
-    feed.push_back({name, moles});
-  }
-  return feed;
-}
 
 // Solver messages name their fields plainly ("species = ..."); on the command line they are options.
 [[noreturn]] void rethrow_as_option(const units::InputError& error) {
@@ -173,7 +149,7 @@ nlohmann::json json_report(const core::EquilibriumResult& result, const std::vec
 
 void run(const EquilibriumOptions& options, const GlobalOptions& global) {
   const core::SpeciesDatabase database = species_database(global.species_file);
-  const std::vector<core::SpeciesAmount> feed = parse_feed(options.feed);
+  const std::vector<core::SpeciesAmount> feed = core::parse_reactants(options.feed, "--feed", database);
   const core::ElementAmounts b = core::element_amounts(database, feed, "--feed");
   const double pressure_Pa = options.pressure.empty() ? units::kStandardAtmosphere_Pa
                                                       : units::parse_pressure(options.pressure, "--pressure").value();
@@ -222,7 +198,7 @@ void run(const EquilibriumOptions& options, const GlobalOptions& global) {
     rethrow_as_option(error);
   }
   const std::string content = options.format == "json"
-                                  ? json_report(result, feed, options, feed_temperature_K).dump(2) + "\n"
+                                  ? render::json_text(json_report(result, feed, options, feed_temperature_K))
                                   : text_report(database, result, feed, options, feed_temperature_K);
   write_output(options.output, content);
 }
@@ -235,15 +211,18 @@ void add_equilibrium_command(CLI::App& app, const GlobalOptions& global) {
       "equilibrium", "Chemical equilibrium of a species feed at fixed T and P, or at the adiabatic flame temperature");
   command->footer(
       "Examples:\n"
-      "  stackbound equilibrium --feed \"CH4=1, O2=2.4, N2=9.03\" --temperature 1800K\n"
-      "  stackbound equilibrium --feed \"CH4=1, O2=2, N2=7.52\" --adiabatic --format json\n"
-      "  stackbound equilibrium --feed \"H2=1, O2=0.5, N2=1.88\" --adiabatic --feed-temperature 600K --pressure 10bar\n"
-      "  stackbound equilibrium --feed \"CO2=1\" --temperature 3000K --species CO2,CO,O2\n"
-      "Amounts are moles of database species (see `stackbound species`); formulas are case-sensitive\n"
-      "(CO2, NO, Ar, C(gr)). Products: every species made of the feed's elements unless --species\n"
-      "restricts them. Results are equilibrium bounds at the stated conditions, not measurements.");
+      "  stackbound equilibrium --feed \"CH4 + 2.4 O2 + 9.03 N2\" --temperature 1800K\n"
+      "  stackbound equilibrium --feed \"CH4 + 2 O2 + 7.52 N2\" --adiabatic --format json\n"
+      "  stackbound equilibrium --feed \"H2 + 0.5 O2 + 1.88 N2\" --adiabatic --feed-temperature 600K --pressure 10bar\n"
+      "  stackbound equilibrium --feed \"CO2\" --temperature 3000K --species CO2,CO,O2\n"
+      "The feed is written as reactants: terms joined by \"+\", each an optional coefficient in mol (a plain\n"
+      "decimal number such as 2.4, .5 or 1e-3; 1 when left out) and a blank before the formula (\"2 O2\", not\n"
+      "\"2O2\"); each species once. Formulas are database species (see `stackbound species`), case-sensitive\n"
+      "(CO2, NO, Ar, C(gr)); notation: docs/composition-notation.md.\n"
+      "Products: every species made of the feed's elements unless --species restricts them.\n"
+      "Results are equilibrium bounds at the stated conditions, not measurements.");
   command
-      ->add_option("--feed", options->feed, "Reactants as NAME=MOLES, comma-separated, e.g. \"CH4=1, O2=2, N2=7.52\"")
+      ->add_option("--feed", options->feed, "Reactants in mol, terms joined by \"+\", e.g. \"CH4 + 2 O2 + 7.52 N2\"")
       ->required();
   command->add_option("--temperature", options->temperature,
                       "Fixed equilibrium temperature with unit, e.g. 1800K, \"1500 degC\"");

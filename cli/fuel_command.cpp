@@ -4,6 +4,7 @@
 
 #include <memory>
 #include <optional>
+#include <stdexcept>
 #include <string>
 #include <vector>
 
@@ -12,10 +13,12 @@
 
 #include <nlohmann/json.hpp>
 
+#include "stackbound/render/finite_figures.hpp"
 #include "stackbound/cli/commands.hpp"
 #include "stackbound/cases/fuel_file.hpp"
 #include "stackbound/cases/species_file.hpp"
 #include "stackbound/core/combustion.hpp"
+#include "stackbound/core/composition_notation.hpp"
 #include "stackbound/core/elements.hpp"
 #include "stackbound/core/fuel_presets.hpp"
 #include "stackbound/units/constants.hpp"
@@ -81,7 +84,8 @@ struct FuelOptions {
 
 core::UltimateAnalysis ultimate_from_text(const FuelOptions& o) {
   core::UltimateAnalysis a;
-  for (const auto& [key, value] : core::parse_composition(o.ultimate, "--ultimate")) {
+  for (const auto& [key, value] :
+       core::parse_analysis(o.ultimate, "--ultimate", core::ultimate_analysis_vocabulary())) {
     if (key == "C") {
       a.carbon_percent = value;
     } else if (key == "H") {
@@ -97,9 +101,8 @@ core::UltimateAnalysis ultimate_from_text(const FuelOptions& o) {
     } else if (key == "moisture") {
       a.moisture_percent = value;
     } else {
-      throw units::InputError(fmt::format("--ultimate = \"{}\": unknown component \"{}\"; accepted: C, H, O, N, S, ash, "
-                                          "moisture (mass %; O may be left out to take it by difference)",
-                                          o.ultimate, key));
+      // parse_analysis accepts only the names of ultimate_analysis_vocabulary(), all handled above.
+      throw std::logic_error(fmt::format("ultimate_from_text: component \"{}\" is not handled", key));
     }
   }
   a.basis = o.analysis_basis == "dry"            ? core::AnalysisBasis::dry
@@ -136,7 +139,7 @@ FuelInput build_fuel(const FuelOptions& o, const core::SpeciesDatabase& db) {
   } else if (!o.gas.empty()) {
     core::GasFuelSpec spec;
     spec.name = "gas fuel";
-    spec.composition_percent = core::parse_composition(o.gas, "--gas");
+    spec.composition_percent = core::parse_analysis(o.gas, "--gas", core::gas_analysis_vocabulary(db));
     spec.basis = o.gas_basis == "mass" ? core::CompositionBasis::mass : core::CompositionBasis::mole;
     spec.field = "--gas";
     input.fuel = core::Fuel::gas(spec, db);
@@ -472,7 +475,7 @@ std::string presets_listing(std::string_view format) {
     for (const core::FuelPreset& p : core::fuel_presets()) {
       list.push_back({{"key", p.key}, {"description", p.description}, {"source", p.source}});
     }
-    return list.dump(2) + "\n";
+    return render::json_text(list);
   }
   std::string text = "Fuel presets (typical values for their class, not the analysis of any fuel lot):\n";
   for (const core::FuelPreset& p : core::fuel_presets()) {
@@ -499,7 +502,7 @@ void run(const FuelOptions& o, const GlobalOptions& global) {
   } else if (input.file_rate) {
     rates = core::rates(result, core::resolve_feed(fuel, *input.file_rate, basis, "fuel.feed_rate"));
   }
-  write_output(o.output, o.format == "json" ? json_report(o, fuel, oxidant, result, rates).dump(2) + "\n"
+  write_output(o.output, o.format == "json" ? render::json_text(json_report(o, fuel, oxidant, result, rates))
                                             : text_report(o, fuel, oxidant, result, rates));
 }
 
@@ -511,19 +514,21 @@ void add_fuel_command(CLI::App& app, const GlobalOptions& global) {
       "fuel", "A fuel's heating values, stoichiometric air, complete-combustion flue gas, dew point and F-factors");
   command->footer(
       "Examples:\n"
-      "  stackbound fuel --gas \"CH4=93, C2H6=4, CO2=1, N2=2\" --excess-air 15%\n"
+      "  stackbound fuel --gas \"CH4 93 %, C2H6 4 %, CO2 1 %, N2 2 %\" --excess-air 15%\n"
       "  stackbound fuel --preset natural_gas --flue-o2 \"3 %\" --rate \"25 MMBtu/h\"\n"
       "  stackbound fuel --preset wood_chips --excess-air 50% --relative-humidity 70% --ambient-temperature 10degC\n"
-      "  stackbound fuel --ultimate \"C=75, H=5, O=6.7, N=1.5, S=2.3, ash=9.5, moisture=8\" --analysis-basis dry \\\n"
-      "                  --hhv \"31.4 MJ/kg\" --excess-air 25% --rate \"12 t/h\" --format json\n"
+      "  stackbound fuel --ultimate \"C 75 %, H 5 %, O 6.7 %, N 1.5 %, S 2.3 %, ash 9.5 %, moisture 8 %\" \\\n"
+      "                  --analysis-basis dry --hhv \"31.4 MJ/kg\" --excess-air 25% --rate \"12 t/h\" --format json\n"
       "  stackbound fuel my_fuel.yaml --lambda 1.2      (file: a `fuel:` mapping as in a case file)\n"
       "  stackbound fuel --list-presets\n"
-      "Percentages in --gas and --ultimate are mole % (gas) or mass % and must sum to 100 (within 1 point,\n"
-      "normalised with a warning). With no operating point the fuel is burned stoichiometrically.\n"
+      "--gas and --ultimate are written as on an analysis certificate: NAME PERCENT % items separated by commas\n"
+      "(the % is required; each name once; notation: docs/composition-notation.md). The percentages are mole %\n"
+      "(gas) or mass % and must sum to 100 (within 1 point, normalised with a warning).\n"
+      "With no operating point the fuel is burned stoichiometrically.\n"
       "Results are complete-combustion estimates for screening; permits, regulators, local codes and licensed\n"
       "practice govern. Method notes: docs/fuels.md.");
   command->add_option("FILE", o->file, "Fuel file (YAML with a `fuel:` mapping, keys as in a case file)");
-  command->add_option("--gas", o->gas, "Gas fuel composition, \"CH4=93, C2H6=4, CO2=1, N2=2\" (percent)");
+  command->add_option("--gas", o->gas, "Gas fuel composition, e.g. \"CH4 93 %, C2H6 4 %, CO2 1 %, N2 2 %\"");
   command->add_option("--gas-basis", o->gas_basis, "Basis of --gas percentages")
       ->check(CLI::IsMember({"mole", "mass"}))
       ->capture_default_str();
@@ -532,8 +537,8 @@ void add_fuel_command(CLI::App& app, const GlobalOptions& global) {
   command->add_option("--preset", o->preset,
                       fmt::format("Built-in typical fuel: {} (see --list-presets)", fmt::join(preset_keys, ", ")));
   command->add_option("--ultimate", o->ultimate,
-                      "Ultimate analysis, mass %: \"C=.., H=.., O=.., N=.., S=.., ash=.., moisture=..\" (O may be "
-                      "left out: by difference)");
+                      "Ultimate analysis, mass %: \"C .. %, H .. %, O .. %, N .. %, S .. %, ash .. %, moisture .. %\" "
+                      "(O may be left out: by difference)");
   command->add_option("--analysis-basis", o->analysis_basis,
                       "Basis of --ultimate and its heating value (dry: moisture as received; dry_ash_free: ash dry, "
                       "moisture as received)")

@@ -2,10 +2,13 @@
 
 #include <exception>
 #include <iostream>
+#include <string>
+#include <vector>
 
 #include <CLI/CLI.hpp>
 
 #include "stackbound/cli/commands.hpp"
+#include "stackbound/core/equilibrium.hpp"
 #include "stackbound/units/input_error.hpp"
 
 int main(int argc, char** argv) {
@@ -27,16 +30,45 @@ int main(int argc, char** argv) {
   sb::add_fuel_command(app, global);
   try {
     app.parse(argc, argv);
+    sb::finish_standard_output();
+  } catch (const CLI::CallForHelp& help) {
+    return app.exit(help);
+  } catch (const CLI::CallForAllHelp& help) {
+    return app.exit(help);
+  } catch (const CLI::RequiredError& error) {
+    // With no known command given, CLI11 says only "A subcommand is required": name what was typed.
+    const std::vector<std::string> rest = app.remaining();
+    if (app.get_subcommands().empty() && !rest.empty()) {
+      std::string commands;
+      for (const CLI::App* command : app.get_subcommands([](const CLI::App*) { return true; })) {
+        commands += (commands.empty() ? "" : ", ") + command->get_name();
+      }
+      std::cerr << "stackbound: error: unknown command \"" << rest.front() << "\"; the commands are " << commands
+                << " (stackbound --help)\n";
+      return 2;
+    }
+    app.exit(error);
+    return 2;
   } catch (const CLI::ParseError& error) {
-    return app.exit(error);
+    // Every command-line mistake (unknown command or option, a missing or malformed value) exits 2,
+    // like any other input error; CLI11's message names what was wrong.
+    app.exit(error);
+    return 2;
   } catch (const sb::PartialFailure& error) {
     std::cerr << "stackbound: " << error.what() << '\n';
     return 4;
   } catch (const stackbound::units::InputError& error) {
     std::cerr << "stackbound: error: " << error.what() << '\n';
     return 2;
+  } catch (const stackbound::core::ConvergenceError& error) {
+    std::cerr << "stackbound: the equilibrium did not converge: " << error.what() << '\n';
+    return 5;
   } catch (const std::exception& error) {
-    std::cerr << "stackbound: failed: " << error.what() << '\n';
+    // Anything else is a defect of the tool, never of the input: inputs are checked at load and
+    // library exceptions are turned into located input errors there.
+    std::cerr << "stackbound: internal error: " << error.what()
+              << "\nThis is a defect of stackbound, not a problem with your input; nothing was written. "
+                 "Please report it with the command line and input files.\n";
     return 3;
   }
   return 0;

@@ -1,7 +1,7 @@
 // `stackbound run CASE.yaml [--format text|json|csv|html] [--output FILE]`: the main job.
 
 #include "stackbound/cases/case_file.hpp"
-#include "stackbound/cases/runner.hpp"
+#include "stackbound/cases/pipeline.hpp"
 #include "stackbound/cases/species_file.hpp"
 #include "stackbound/cli/commands.hpp"
 #include "stackbound/render/run_output.hpp"
@@ -34,9 +34,10 @@ void add_run_command(CLI::App& app, const GlobalOptions& global) {
   add_format_option(*command, options->format, {"text", "json", "csv", "html"});
   command->add_option("--output", options->output, "Write to FILE (whole or not at all) instead of stdout");
   command->callback([options, &global] {
-    const CaseDefinition definition = load_case(options->case_file);
+    LoadedCase loaded = load_case_file(options->case_file);
     const core::SpeciesDatabase database = species_database(global.species_file);
-    const RunResult result = run_case(definition, database);
+    const RunResult result =
+        with_positions(loaded.sources, [&] { return run_case(std::move(loaded.definition), database); });
     write_output(options->output, render::render_run(result, options->format));
   });
 }

@@ -4,6 +4,7 @@
 
 #include <nlohmann/json.hpp>
 
+#include "stackbound/render/finite_figures.hpp"
 #include "stackbound/cli/commands.hpp"
 #include "stackbound/cases/species_file.hpp"
 #include "stackbound/units/constants.hpp"
@@ -20,6 +21,7 @@ struct SpeciesOptions {
   std::string name;
   std::string temperature;
   std::string format;
+  std::string output;
 };
 
 std::string species_table(const core::SpeciesDatabase& database) {
@@ -54,7 +56,8 @@ void run(const SpeciesOptions& options, const GlobalOptions& global) {
     if (!options.temperature.empty()) {
       throw units::InputError("--temperature needs a species NAME, e.g. stackbound species CO2 --temperature 1500K");
     }
-    write_output("", options.format == "json" ? species_list_json(database).dump(2) + "\n" : species_table(database));
+    write_output(options.output,
+                 options.format == "json" ? render::json_text(species_list_json(database)) : species_table(database));
     return;
   }
   const core::Species& species = database.at(options.name, "NAME");
@@ -74,10 +77,10 @@ void run(const SpeciesOptions& options, const GlobalOptions& global) {
                                 {"pressure_Pa", units::kStandardStatePressure_Pa},
                                 {"molar_mass_g_per_mol", species.molar_mass_kg_per_mol() * 1e3},
                                 {"source", species.source()}};
-    write_output("", out.dump(2) + "\n");
+    write_output(options.output, render::json_text(out));
     return;
   }
-  write_output("", fmt::format("{} at {:.2f} K, standard state (1 bar), source {}\n"
+  write_output(options.output, fmt::format("{} at {:.2f} K, standard state (1 bar), source {}\n"
                                "  cp = {:>14.4f} J/(mol K)\n"
                                "  h  = {:>14.2f} J/mol   (includes the enthalpy of formation at 298.15 K)\n"
                                "  s  = {:>14.4f} J/(mol K)\n"
@@ -99,6 +102,7 @@ void add_species_command(CLI::App& app, const GlobalOptions& global) {
   command->add_option("NAME", options->name, "Species formula, e.g. CO2");
   command->add_option("--temperature", options->temperature, "Temperature with unit, e.g. 1500K, \"1200 degC\" (default 298.15 K)");
   add_format_option(*command, options->format, {"text", "json"});
+  command->add_option("--output", options->output, "Write to FILE (whole or not at all) instead of stdout");
   command->callback([options, &global] { run(*options, global); });
 }
 

@@ -18,20 +18,42 @@ using namespace stackbound::cases;
 
 namespace {
 
+constexpr std::size_t kDefaultMaxSweepPoints = 10'000'000;
+
 struct SweepCli {
   std::string case_file;
   std::vector<std::string> vary;
   std::string format;
   std::string output;
   unsigned threads = 0;
+  std::size_t max_points = kDefaultMaxSweepPoints;
 };
 
+// The total points of the grid, checked against the cap before any work: a grid of 31623 x 31623
+// points would otherwise stream until the disk fills. The product saturates instead of overflowing.
+std::size_t checked_sweep_size(const std::vector<VarySpec>& vary, std::size_t max_points) {
+  std::size_t total = 1;
+  std::string grid;
+  for (const VarySpec& spec : vary) {
+    const std::size_t n = spec.values.size();
+    total = (n != 0 && total > max_points / n) ? max_points + 1 : total * n;
+    grid += (grid.empty() ? "" : " x ") + std::to_string(n);
+  }
+  if (total > max_points) {
+    throw units::InputError(fmt::format("--vary: the grid of {} points exceeds the cap of {} points; use fewer STEPS, "
+                                        "or raise the cap with --max-points",
+                                        grid, max_points));
+  }
+  return total;
+}
+
 void run(const SweepCli& cli, const GlobalOptions& global) {
-  const CaseDefinition definition = load_case(cli.case_file);
   std::vector<VarySpec> vary;
   for (const std::string& text : cli.vary) vary.push_back(parse_vary(text));
+  const std::size_t total = checked_sweep_size(vary, cli.max_points);
+  const LoadedCase loaded = load_case_file(cli.case_file);
+  const CaseDefinition& definition = loaded.definition;
   check_sweep(definition, vary);
-  const std::size_t total = sweep_size(vary);
   if (cli.format == "html" && total > render::kSweepHtmlMaxPoints) {
     throw units::InputError(fmt::format("--format html holds every point for its plots: at most {} points ({} asked); "
                                         "use --format csv",
@@ -41,6 +63,7 @@ void run(const SweepCli& cli, const GlobalOptions& global) {
   const ProgressBar progress;
   SweepOptions options;
   options.threads = cli.threads;
+  options.sources = &loaded.sources;
   options.progress = [&](std::size_t done, std::size_t all) { progress.update(done, all); };
   OutputStream out(cli.output);
   std::size_t failed = 0;
@@ -51,7 +74,7 @@ void run(const SweepCli& cli, const GlobalOptions& global) {
   } else {
     render::SweepHtmlCollector collector(vary);
     failed = run_sweep(definition, vary, database, [&](const SweepPoint& p) { collector.add(p); }, options);
-    out.write(render::render_html(collector.document(definition)));
+    out.write(render::render_report(collector.document(definition), "html"));
   }
   out.commit();
   if (failed > 0) {
@@ -71,13 +94,17 @@ void add_sweep_command(CLI::App& app, const GlobalOptions& global) {
       "  stackbound sweep cases/examples/gas_boiler.yaml --vary excess_air=8%:15%:8 --format html --output ea.html\n"
       "  stackbound sweep cases/examples/wood_chip_boiler.yaml --vary air_preheat=20degC:320degC:7 --vary heat_loss=10%:30%:3\n"
       "Parameters: excess_air, flue_o2, firing_temperature, heat_loss, air_preheat, humidity, o2_enrichment,\n"
-      "pressure, blend_fraction; values with units; STEPS >= 2 points; the last --vary changes fastest.\n"
-      "Exit codes: 0 all points ran, 2 bad input, 4 some points failed (their rows say why).");
+      "pressure, blend_fraction, reference_o2; values with units; STEPS >= 2 points; the last --vary changes fastest.\n"
+      "Exit codes: 0 all points ran, 2 bad input, 4 some points failed (their rows say why).\n"
+      "At most --max-points points (default 10000000): the grid is checked before any work.");
   command->add_option("CASE", cli->case_file, "Case file (YAML)")->required();
   command->add_option("--vary", cli->vary, "PARAM=FROM:TO:STEPS, e.g. excess_air=5%:45%:9 (repeatable)")->required();
   add_format_option(*command, cli->format, {"csv", "html"});
   command->add_option("--output", cli->output, "Write to FILE (whole or not at all) instead of stdout");
   command->add_option("--threads", cli->threads, "Worker threads (default: all cores)");
+  command->add_option("--max-points", cli->max_points,
+                      fmt::format("Refuse grids of more points than this (default {})", kDefaultMaxSweepPoints))
+      ->check(CLI::PositiveNumber);
   command->callback([cli, &global] { run(*cli, global); });
 }
 

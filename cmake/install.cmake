@@ -10,7 +10,9 @@ install(TARGETS stackbound RUNTIME DESTINATION ${CMAKE_INSTALL_BINDIR})
 foreach(layer units core emissions cases render)
   install(DIRECTORY ${PROJECT_SOURCE_DIR}/${layer}/
           DESTINATION ${CMAKE_INSTALL_INCLUDEDIR}/stackbound/${layer}
-          FILES_MATCHING PATTERN "*.hpp" PATTERN "examples" EXCLUDE)
+          FILES_MATCHING PATTERN "*.hpp" PATTERN "examples" EXCLUDE
+          # internal to the equilibrium solver's sources, not part of the interface
+          PATTERN "equilibrium_steps.hpp" EXCLUDE)
 endforeach()
 install(EXPORT stackboundTargets NAMESPACE stackbound::
         DESTINATION ${CMAKE_INSTALL_LIBDIR}/cmake/stackbound)

@@ -17,7 +17,6 @@ namespace stackbound::core {
 
 namespace {
 
-constexpr double kR = units::kGasConstant_J_per_mol_K;
 constexpr std::size_t kC = 0, kH = 1, kO = 2, kN = 3, kS = 4, kAr = 5, kHe = 6;
 
 std::size_t at(FlueSpecies species) { return static_cast<std::size_t>(species); }

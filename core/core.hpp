@@ -1,8 +1,9 @@
 #pragma once
 // Umbrella header of the core layer: elements and species data, chemical equilibrium (TP and HP),
-// fuels, oxidant, humidity and complete-combustion stoichiometry.
+// fuels and the notation of compositions, oxidant, humidity and complete-combustion stoichiometry.
 #include "stackbound/core/adiabatic_flame.hpp"
 #include "stackbound/core/combustion.hpp"
+#include "stackbound/core/composition_notation.hpp"
 #include "stackbound/core/element_amounts.hpp"
 #include "stackbound/core/elements.hpp"
 #include "stackbound/core/equilibrium.hpp"

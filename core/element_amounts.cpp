@@ -46,7 +46,7 @@ std::vector<const Species*> checked_feed(const SpeciesDatabase& db, std::span<co
   if (feed.empty()) {
     throw units::InputError(
         fmt::format("{}: the feed is empty; give at least one species with a positive amount "
-                    "(e.g. \"CH4=1, O2=2, N2=7.52\")",
+                    "(e.g. \"CH4 + 2 O2 + 7.52 N2\")",
                     field));
   }
   std::vector<const Species*> species;
@@ -55,7 +55,7 @@ std::vector<const Species*> checked_feed(const SpeciesDatabase& db, std::span<co
   for (const SpeciesAmount& entry : feed) {
     const Species& s = db.at(entry.formula, field);
     if (!std::isfinite(entry.moles) || entry.moles < 0.0) {
-      throw units::InputError(fmt::format("{} = \"{}={}\": the amount must be a finite number >= 0 mol", field,
+      throw units::InputError(fmt::format("{}.{} = {} mol: the amount must be a finite number >= 0 mol", field,
                                           entry.formula, entry.moles));
     }
     any_positive = any_positive || entry.moles > 0.0;

@@ -29,8 +29,8 @@
 
 namespace stackbound::core {
 
-struct EquilibriumTables;  // the solver's precomputed species rows (core/equilibrium.cpp)
-struct EquilibriumTerm;    // one species' rows in the Newton system (core/equilibrium.cpp)
+struct EquilibriumTables;  // the solver's precomputed species rows (core/equilibrium_steps.hpp)
+struct EquilibriumTerm;    // one species' rows in the Newton system (core/equilibrium_steps.hpp)
 
 struct EquilibriumResult {
   double temperature_K = 0.0;

@@ -2,7 +2,6 @@
 
 #include <algorithm>
 #include <cassert>
-#include <charconv>
 #include <cmath>
 #include <numeric>
 
@@ -77,7 +76,7 @@ double normalising_factor(double sum, const std::string& field, std::string_view
   if (!(sum > 0.0)) throw units::InputError(fmt::format("{}: the {} sum to 0 %; give percentages adding up to 100 %", field, what));
   const double difference = sum - 100.0;
   if (std::abs(difference) > kSumTolerance_percent) {
-    std::string hint = std::abs(sum - 1.0) < 0.05 ? "; they look like fractions: give percent (e.g. CH4=93, not 0.93)"
+    std::string hint = std::abs(sum - 1.0) < 0.05 ? "; they look like fractions: give percent (e.g. 93 %, not 0.93)"
                                                   : "; check for a missing or mistyped component";
     throw units::InputError(fmt::format("{}: the {} sum to {:.6g} %, which is more than {} percentage point from 100 %{}",
                                         field, what, sum, kSumTolerance_percent, hint));
@@ -136,7 +135,7 @@ std::string_view correlation_citation(HeatingValueCorrelation correlation) {
 Fuel Fuel::gas(const GasFuelSpec& spec, const SpeciesDatabase& database) {
   assert(element_indices_are_consistent() && "ElementMoles indices must follow known_elements()");
   if (spec.composition_percent.empty()) {
-    throw units::InputError(fmt::format("{}: empty composition; give species percentages, e.g. \"CH4=95, C2H6=3, N2=2\"",
+    throw units::InputError(fmt::format("{}: empty composition; give at least one species with its percentage",
                                         spec.field));
   }
   Fuel fuel;
@@ -305,6 +304,88 @@ double estimate_hhv_dry_J_per_kg(const UltimateAnalysis& analysis, HeatingValueC
   return 1e6 * correlation_MJ_per_kg(dry_analysis(as_received(analysis, "analysis", ignored)), correlation);
 }
 
+namespace {
+
+// An as-received HHV and how it was obtained.
+struct HeatingValue {
+  double hhv_J_per_kg = 0.0;
+  std::string method;
+};
+
+// From a measured HHV or LHV on its basis (`hv_field` names it in messages). A large gap to a
+// published correlation's estimate for the analysis is warned about: it usually means a basis or
+// unit mix-up.
+HeatingValue measured_heating_value(const MeasuredHeatingValue& hv, const AsReceived& r, const UltimateAnalysis& dry,
+                                    const std::string& hv_field, std::vector<std::string>& warnings) {
+  if (!std::isfinite(hv.value_J_per_kg) || hv.value_J_per_kg <= 0.0) {
+    throw units::InputError(fmt::format("{} = {:.6g} MJ/kg: a heating value must be a finite number above 0", hv_field,
+                                        hv.value_J_per_kg * 1e-6));
+  }
+  if (hv.value_J_per_kg > 150e6) {
+    throw units::InputError(fmt::format("{} = {:.6g} MJ/kg: above the HHV of hydrogen (141.8 MJ/kg); check the unit",
+                                        hv_field, hv.value_J_per_kg * 1e-6));
+  }
+  const double to_ar = r.factor(hv.basis);
+  if (!(to_ar > 0.0)) {
+    throw units::InputError(
+        fmt::format("{}: a {} heating value needs moisture and ash below 100 %", hv_field, to_string(hv.basis)));
+  }
+  double hhv_on_basis = hv.value_J_per_kg;
+  if (hv.kind == HeatingValueKind::lower) {
+    // water formed per kg on the heating value's basis: hydrogen water, plus moisture when as received
+    const double water_on_basis =
+        (water_formed_kg_per_kg(r) - (hv.basis == AnalysisBasis::as_received ? 0.0 : r.moisture)) / to_ar;
+    hhv_on_basis += vaporisation_J_per_kg_water() * water_on_basis;
+  }
+  HeatingValue value;
+  value.hhv_J_per_kg = hhv_on_basis * to_ar;
+  value.method = fmt::format("measured {}, {} basis, {:.6g} MJ/kg", to_string(hv.kind), to_string(hv.basis),
+                             hv.value_J_per_kg * 1e-6);
+  const double estimate =
+      1e6 * correlation_MJ_per_kg(dry, HeatingValueCorrelation::channiwala_parikh) * (1.0 - r.moisture);
+  const double gap = value.hhv_J_per_kg / estimate - 1.0;
+  if (std::abs(gap) > 0.10) {
+    warnings.push_back(fmt::format(
+        "{}: the HHV ({:.4g} MJ/kg as received) differs by {:+.0f} % from the {} estimate ({:.4g} MJ/kg) for this "
+        "analysis; check the heating value's basis and unit",
+        hv_field, value.hhv_J_per_kg * 1e-6, gap * 100.0, correlation_name(HeatingValueCorrelation::channiwala_parikh),
+        estimate * 1e-6));
+  }
+  return value;
+}
+
+// From a correlation on the dry analysis; always warned about, as an estimate is not a measurement.
+HeatingValue estimated_heating_value(HeatingValueCorrelation correlation, const AsReceived& r,
+                                     const UltimateAnalysis& dry, const std::string& hv_field,
+                                     std::vector<std::string>& warnings) {
+  const double hhv_dry = 1e6 * correlation_MJ_per_kg(dry, correlation);
+  if (!(hhv_dry > 0.0)) {
+    throw units::InputError(fmt::format("{}: the {} estimate is {:.4g} MJ/kg (dry), not a usable heating value",
+                                        hv_field, correlation_name(correlation), hhv_dry * 1e-6));
+  }
+  HeatingValue value;
+  value.hhv_J_per_kg = hhv_dry * (1.0 - r.moisture);
+  value.method = fmt::format("estimated HHV ({:.4g} MJ/kg dry) by the {} correlation: {}", hhv_dry * 1e-6,
+                             correlation_name(correlation), correlation_citation(correlation));
+  warnings.push_back(fmt::format("{}: the HHV is an estimate by the {} correlation, not a measurement", hv_field,
+                                 correlation_name(correlation)));
+  return value;
+}
+
+// Element amounts per kg as received, the moisture's water included.
+ElementMoles condensed_element_moles(const AsReceived& r) {
+  const double water_mol = r.moisture / water_molar_mass_kg_per_mol();
+  ElementMoles e{};
+  e[kC] = r.carbon / atomic_weight_kg_per_mol(kC);
+  e[kH] = r.hydrogen / atomic_weight_kg_per_mol(kH) + 2.0 * water_mol;
+  e[kO] = r.oxygen / atomic_weight_kg_per_mol(kO) + water_mol;
+  e[kN] = r.nitrogen / atomic_weight_kg_per_mol(kN);
+  e[kS] = r.sulfur / atomic_weight_kg_per_mol(kS);
+  return e;
+}
+
+}  // namespace
+
 Fuel Fuel::condensed(const CondensedFuelSpec& spec, const SpeciesDatabase& database) {
   assert(element_indices_are_consistent() && "ElementMoles indices must follow known_elements()");
   if (spec.state != FuelState::liquid && spec.state != FuelState::solid) {
@@ -315,7 +396,6 @@ Fuel Fuel::condensed(const CondensedFuelSpec& spec, const SpeciesDatabase& datab
   fuel.name_ = spec.name;
   fuel.state_ = spec.state;
   const AsReceived r = as_received(spec.analysis, spec.field, fuel.warnings_);
-  const double vaporisation = vaporisation_J_per_kg_water();
   const std::string hv_field = spec.field + ".heating_value";
 
   if (spec.heating_value && spec.estimate) {
@@ -324,76 +404,31 @@ Fuel Fuel::condensed(const CondensedFuelSpec& spec, const SpeciesDatabase& datab
                                         hv_field));
   }
   const UltimateAnalysis dry = dry_analysis(r);
+  HeatingValue heating_value;
   if (spec.heating_value) {
-    const MeasuredHeatingValue& hv = *spec.heating_value;
-    if (!std::isfinite(hv.value_J_per_kg) || hv.value_J_per_kg <= 0.0) {
-      throw units::InputError(fmt::format("{} = {:.6g} MJ/kg: a heating value must be a finite number above 0", hv_field,
-                                          hv.value_J_per_kg * 1e-6));
-    }
-    if (hv.value_J_per_kg > 150e6) {
-      throw units::InputError(fmt::format("{} = {:.6g} MJ/kg: above the HHV of hydrogen (141.8 MJ/kg); check the unit",
-                                          hv_field, hv.value_J_per_kg * 1e-6));
-    }
-    const double to_ar = r.factor(hv.basis);
-    if (!(to_ar > 0.0)) {
-      throw units::InputError(fmt::format("{}: a {} heating value needs moisture and ash below 100 %", hv_field,
-                                          to_string(hv.basis)));
-    }
-    double hhv_on_basis = hv.value_J_per_kg;
-    if (hv.kind == HeatingValueKind::lower) {
-      // water formed per kg on the heating value's basis: hydrogen water, plus moisture when as received
-      const double water_on_basis =
-          (water_formed_kg_per_kg(r) - (hv.basis == AnalysisBasis::as_received ? 0.0 : r.moisture)) / to_ar;
-      hhv_on_basis += vaporisation * water_on_basis;
-    }
-    fuel.hhv_J_per_kg_ = hhv_on_basis * to_ar;
-    fuel.heating_value_method_ = fmt::format("measured {}, {} basis, {:.6g} MJ/kg", to_string(hv.kind),
-                                             to_string(hv.basis), hv.value_J_per_kg * 1e-6);
-    // A large gap to a published correlation usually means a basis or unit mix-up.
-    const double estimate = 1e6 * correlation_MJ_per_kg(dry, HeatingValueCorrelation::channiwala_parikh) * (1.0 - r.moisture);
-    const double gap = fuel.hhv_J_per_kg_ / estimate - 1.0;
-    if (std::abs(gap) > 0.10) {
-      fuel.warnings_.push_back(fmt::format(
-          "{}: the HHV ({:.4g} MJ/kg as received) differs by {:+.0f} % from the {} estimate ({:.4g} MJ/kg) for this "
-          "analysis; check the heating value's basis and unit",
-          hv_field, fuel.hhv_J_per_kg_ * 1e-6, gap * 100.0,
-          correlation_name(HeatingValueCorrelation::channiwala_parikh), estimate * 1e-6));
-    }
+    heating_value = measured_heating_value(*spec.heating_value, r, dry, hv_field, fuel.warnings_);
   } else if (spec.estimate) {
-    const double hhv_dry = 1e6 * correlation_MJ_per_kg(dry, *spec.estimate);
-    if (!(hhv_dry > 0.0)) {
-      throw units::InputError(fmt::format("{}: the {} estimate is {:.4g} MJ/kg (dry), not a usable heating value",
-                                          hv_field, correlation_name(*spec.estimate), hhv_dry * 1e-6));
-    }
-    fuel.hhv_J_per_kg_ = hhv_dry * (1.0 - r.moisture);
-    fuel.heating_value_method_ =
-        fmt::format("estimated HHV ({:.4g} MJ/kg dry) by the {} correlation: {}", hhv_dry * 1e-6,
-                    correlation_name(*spec.estimate), correlation_citation(*spec.estimate));
-    fuel.warnings_.push_back(fmt::format("{}: the HHV is an estimate by the {} correlation, not a measurement",
-                                         hv_field, correlation_name(*spec.estimate)));
+    heating_value = estimated_heating_value(*spec.estimate, r, dry, hv_field, fuel.warnings_);
   } else {
     throw units::InputError(fmt::format("{}: missing; a liquid or solid fuel needs a measured heating value (HHV or "
                                         "LHV, with its basis) or an estimate by a named correlation "
                                         "(channiwala-parikh, boie)",
                                         hv_field));
   }
-  fuel.lhv_J_per_kg_ = fuel.hhv_J_per_kg_ - vaporisation * water_formed_kg_per_kg(r);
+  fuel.hhv_J_per_kg_ = heating_value.hhv_J_per_kg;
+  fuel.heating_value_method_ = std::move(heating_value.method);
+  fuel.lhv_J_per_kg_ = fuel.hhv_J_per_kg_ - vaporisation_J_per_kg_water() * water_formed_kg_per_kg(r);
   if (!(fuel.lhv_J_per_kg_ > 0.0)) {
     fuel.warnings_.push_back(fmt::format("{}: the LHV as received is {:.4g} MJ/kg: too wet to release net heat",
                                          hv_field, fuel.lhv_J_per_kg_ * 1e-6));
   }
 
-  const double water_mol = r.moisture / water_molar_mass_kg_per_mol();
-  ElementMoles& e = fuel.element_mol_per_kg_;
-  e[kC] = r.carbon / atomic_weight_kg_per_mol(kC);
-  e[kH] = r.hydrogen / atomic_weight_kg_per_mol(kH) + 2.0 * water_mol;
-  e[kO] = r.oxygen / atomic_weight_kg_per_mol(kO) + water_mol;
-  e[kN] = r.nitrogen / atomic_weight_kg_per_mol(kN);
-  e[kS] = r.sulfur / atomic_weight_kg_per_mol(kS);
+  fuel.element_mol_per_kg_ = condensed_element_moles(r);
   fuel.moisture_kg_per_kg_ = r.moisture;
   fuel.ash_kg_per_kg_ = r.ash;
   fuel.condensed_mass_fraction_ = 1.0;
-  fuel.condensed_formation_J_per_kg_ = fuel.hhv_J_per_kg_ + products_minus_oxygen_h298(e, database, true);
+  fuel.condensed_formation_J_per_kg_ =
+      fuel.hhv_J_per_kg_ + products_minus_oxygen_h298(fuel.element_mol_per_kg_, database, true);
   if (spec.specific_heat_J_per_kg_K) {
     const double cp = *spec.specific_heat_J_per_kg_K;
     if (!std::isfinite(cp) || cp <= 0.0 || cp > 10000.0) {
@@ -445,8 +480,10 @@ Fuel Fuel::blend(std::string name, const std::vector<BlendPart>& parts, BlendBas
     const Fuel& part = parts[i].fuel;
     if (w == 0.0) continue;
     for (const auto& [formula, n] : part.gas_mol_per_kg_) {
+      // Captures a named copy, not the structured binding: capturing a binding is new in C++20 and
+      // not every supported compiler has it yet.
       auto found = std::find_if(fuel.gas_mol_per_kg_.begin(), fuel.gas_mol_per_kg_.end(),
-                                [&](const auto& item) { return item.first == formula; });
+                                [name = formula](const auto& item) { return item.first == name; });
       if (found == fuel.gas_mol_per_kg_.end()) {
         fuel.gas_mol_per_kg_.emplace_back(formula, w * n);
       } else {
@@ -533,42 +570,6 @@ double Fuel::enthalpy_J_per_kg(double temperature_K, const SpeciesDatabase& data
   h += condensed_formation_J_per_kg_;
   if (specific_heat_known_) h += condensed_heat_capacity_J_per_kg_K_ * (temperature_K - kT0_K);
   return h;
-}
-
-// ---------------------------------------------------------------------------------------------------
-
-std::vector<std::pair<std::string, double>> parse_composition(std::string_view text, std::string_view field) {
-  std::vector<std::pair<std::string, double>> items;
-  const auto trim = [](std::string_view s) {
-    const auto first = s.find_first_not_of(" \t");
-    if (first == std::string_view::npos) return std::string_view{};
-    return s.substr(first, s.find_last_not_of(" \t") - first + 1);
-  };
-  std::size_t start = 0;
-  while (start <= text.size()) {
-    const std::size_t comma = std::min(text.find(',', start), text.size());
-    const std::string_view item = trim(text.substr(start, comma - start));
-    const std::size_t equals = item.find('=');
-    if (item.empty() || equals == std::string_view::npos) {
-      throw units::InputError(fmt::format("{} = \"{}\": item \"{}\" is not SPECIES=PERCENT (e.g. \"CH4=93, C2H6=4\")",
-                                          field, text, item));
-    }
-    const std::string_view name = trim(item.substr(0, equals));
-    std::string_view number = trim(item.substr(equals + 1));
-    if (!number.empty() && number.back() == '%') number = trim(number.substr(0, number.size() - 1));
-    if (!number.empty() && number.front() == '+') number.remove_prefix(1);
-    double value = 0.0;
-    const auto [end, error] = std::from_chars(number.data(), number.data() + number.size(), value);
-    if (name.empty() || number.empty() || error != std::errc() || end != number.data() + number.size() ||
-        !std::isfinite(value)) {
-      throw units::InputError(fmt::format("{} = \"{}\": item \"{}\" is not SPECIES=PERCENT with a number (e.g. "
-                                          "\"CH4=93\")",
-                                          field, text, item));
-    }
-    items.emplace_back(std::string(name), value);
-    start = comma + 1;
-  }
-  return items;
 }
 
 }  // namespace stackbound::core

@@ -223,8 +223,4 @@ struct BlendPart {
 // Estimated HHV, J/kg on the dry basis, from an ultimate analysis (any basis; converted to dry).
 double estimate_hhv_dry_J_per_kg(const UltimateAnalysis& analysis, HeatingValueCorrelation correlation);
 
-// Parses "CH4=93, C2H6=4, CO2=1, N2=2" into (species, percent) pairs. Throws units::InputError naming
-// `field` for an item without "=", an empty name or a value that is not a number.
-std::vector<std::pair<std::string, double>> parse_composition(std::string_view text, std::string_view field);
-
 }  // namespace stackbound::core

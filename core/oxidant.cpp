@@ -14,7 +14,9 @@ namespace stackbound::core {
 
 namespace {
 
-constexpr std::size_t kN2 = 0, kO2 = 1, kAr = 2, kCO2 = 3, kH2O = 4;
+// Indices of the species this file reads by name (the order of OxidantSpecies).
+constexpr std::size_t kO2 = static_cast<std::size_t>(OxidantSpecies::O2);
+constexpr std::size_t kH2O = static_cast<std::size_t>(OxidantSpecies::H2O);
 constexpr double kLowestOxidantTemperature_K = 200.0;
 constexpr double kHighestOxidantTemperature_K = 3000.0;
 

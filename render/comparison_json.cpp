@@ -23,12 +23,12 @@ nlohmann::json comparison_json(const Comparison& c) {
                      {"title", c.runs[i].definition.title},
                      {"values", values},
                      {"difference_from_first", differences},
-                     {"findings", c.runs[i].findings}});
+                     {"findings", c.runs[i].screening.findings}});
   }
   nlohmann::json units = nlohmann::json::object();
   for (const MetricColumn& column : c.columns) units[column.key] = column.header;
   return {{"bound_statement", kBoundStatement}, {"cases", cases},      {"columns", units},
-          {"flags", c.flags},                    {"cautions", c.runs.front().cautions}};
+          {"flags", c.flags},                    {"cautions", c.runs.front().screening.cautions}};
 }
 
 }  // namespace stackbound::render

@@ -23,12 +23,12 @@ nlohmann::json run_json(const RunResult& r) {
   using nlohmann::json;
   json mole_fractions = json::object();
   json moles = json::object();
-  for (std::size_t i = 0; i < r.equilibrium.species.size(); ++i) {
-    mole_fractions[r.equilibrium.species[i]] = r.equilibrium.mole_fractions[i];
-    moles[r.equilibrium.species[i]] = r.equilibrium.moles[i];
+  for (std::size_t i = 0; i < r.fired.equilibrium.species.size(); ++i) {
+    mole_fractions[r.fired.equilibrium.species[i]] = r.fired.equilibrium.mole_fractions[i];
+    moles[r.fired.equilibrium.species[i]] = r.fired.equilibrium.moles[i];
   }
   json emissions = json::object();
-  for (const PollutantBound& p : r.pollutants) {
+  for (const PollutantBound& p : r.emissions.pollutants) {
     const em::StackEmission& e = p.emission;
     emissions[p.name] = {
         {"wet_mole_fraction", p.wet_mole_fraction},
@@ -45,7 +45,7 @@ nlohmann::json run_json(const RunResult& r) {
     };
   }
   json limits = json::array();
-  for (const LimitScreening& l : r.limits) {
+  for (const LimitScreening& l : r.screening.limits) {
     limits.push_back({{"pollutant", l.pollutant},
                       {"limit", l.limit_text},
                       {"value", l.result.value},
@@ -58,7 +58,7 @@ nlohmann::json run_json(const RunResult& r) {
                       {"wording", l.result.wording}});
   }
   json measured = json::array();
-  for (const MeasuredComparison& m : r.measured) {
+  for (const MeasuredComparison& m : r.screening.measured) {
     measured.push_back({{"quantity", m.quantity},
                         {"stated", m.measured_text},
                         {"basis", m.basis},
@@ -69,65 +69,66 @@ nlohmann::json run_json(const RunResult& r) {
   }
   json flue_wet = json::object();
   json flue_dry = json::object();
-  for (const auto& [name, x] : r.combustion.flue.mole_fractions(core::GasBasis::wet)) flue_wet[name] = x;
-  for (const auto& [name, x] : r.combustion.flue.mole_fractions(core::GasBasis::dry)) flue_dry[name] = x;
-  const core::FuelFeed& feed = r.rates.feed;
+  for (const auto& [name, x] : r.resolved.combustion.flue.mole_fractions(core::GasBasis::wet)) flue_wet[name] = x;
+  for (const auto& [name, x] : r.resolved.combustion.flue.mole_fractions(core::GasBasis::dry)) flue_dry[name] = x;
+  const core::FuelFeed& feed = r.resolved.rates.feed;
   return {
       {"case", {{"title", r.definition.title}, {"description", r.definition.description}, {"file", r.definition.origin},
                 {"plant_type", r.definition.plant_type}}},
       {"bound_statement", kBoundStatement},
       {"fuel",
-       {{"name", r.fuel.name()},
-        {"source", r.fuel.source()},
-        {"heating_value_method", r.fuel.heating_value_method()},
-        {"hhv_MJ_per_kg", r.combustion.hhv_J_per_kg / 1e6},
-        {"lhv_MJ_per_kg", r.combustion.lhv_J_per_kg / 1e6},
+       {{"name", r.resolved.fuel.name()},
+        {"source", r.resolved.fuel.source()},
+        {"heating_value_method", r.resolved.fuel.heating_value_method()},
+        {"hhv_MJ_per_kg", r.resolved.combustion.hhv_J_per_kg / 1e6},
+        {"lhv_MJ_per_kg", r.resolved.combustion.lhv_J_per_kg / 1e6},
         {"feed_rate", feed.given},
         {"mass_flow_kg_per_h", feed.mass_flow_kg_per_s * kSecondsPerHour},
         {"heat_input_hhv_MW", feed.heat_input_hhv_W / 1e6},
-        {"Fd_dscf_per_MMBtu", r.combustion.f_factors.fd_dscf_per_MMBtu()},
-        {"Fw_wscf_per_MMBtu", r.combustion.f_factors.fw_wscf_per_MMBtu()},
-        {"Fc_scf_per_MMBtu", r.combustion.f_factors.fc_scf_per_MMBtu()}}},
+        {"Fd_dscf_per_MMBtu", r.resolved.combustion.f_factors.fd_dscf_per_MMBtu()},
+        {"Fw_wscf_per_MMBtu", r.resolved.combustion.f_factors.fw_wscf_per_MMBtu()},
+        {"Fc_scf_per_MMBtu", r.resolved.combustion.f_factors.fc_scf_per_MMBtu()}}},
       {"combustion",
-       {{"air_ratio", r.combustion.air_ratio},
-        {"excess_air_percent", r.combustion.excess_air() * 100.0},
-        {"stoichiometric_air_kg_per_kg", r.combustion.stoichiometric_air_kg_per_kg},
+       {{"air_ratio", r.resolved.combustion.air_ratio},
+        {"excess_air_percent", r.resolved.combustion.excess_air() * 100.0},
+        {"stoichiometric_air_kg_per_kg", r.resolved.combustion.stoichiometric_air_kg_per_kg},
         {"flue_gas_wet", flue_wet},
         {"flue_gas_dry", flue_dry},
-        {"water_dew_point_K", r.combustion.water_dew_point_K ? json(*r.combustion.water_dew_point_K) : json(nullptr)}}},
+        {"water_dew_point_K",
+         r.resolved.combustion.water_dew_point_K ? json(*r.resolved.combustion.water_dew_point_K) : json(nullptr)}}},
       {"firing",
-       {{"temperature_K", r.firing_temperature_K},
-        {"pressure_Pa", r.firing_pressure_Pa},
+       {{"temperature_K", r.fired.temperature_K},
+        {"pressure_Pa", r.fired.pressure_Pa},
         {"adiabatic", r.definition.firing.adiabatic},
         {"heat_loss_fraction", r.definition.firing.heat_loss_fraction}}},
       {"equilibrium",
        {{"mole_fractions", mole_fractions},
         {"moles_per_kg_fuel", moles},
-        {"total_gas_moles_per_kg_fuel", r.equilibrium.total_gas_moles},
-        {"iterations", r.equilibrium.iterations},
-        {"element_residual", r.equilibrium.element_residual},
-        {"graphite_present", r.equilibrium.graphite_present}}},
+        {"total_gas_moles_per_kg_fuel", r.fired.equilibrium.total_gas_moles},
+        {"iterations", r.fired.equilibrium.iterations},
+        {"element_residual", r.fired.equilibrium.element_residual},
+        {"graphite_present", r.fired.equilibrium.graphite_present}}},
       {"stack",
        {{"temperature_K", r.definition.stack.temperature_K},
         {"pressure_Pa", r.definition.stack.pressure_Pa},
-        {"o2_dry_percent", r.stack_o2_dry * 100.0},
-        {"moisture_percent", r.stack_h2o_wet * 100.0},
-        {"wet_flow_mol_per_s", r.stack_wet_mol_per_s},
-        {"wet_flow_Nm3_per_h", normal_m3_per_h(r.stack_wet_mol_per_s, *r.normal)},
-        {"dry_flow_Nm3_per_h", normal_m3_per_h(r.stack_dry_mol_per_s, *r.normal)},
-        {"actual_flow_m3_per_h", r.stack_actual_m3_per_s * kSecondsPerHour}}},
-      {"reference_o2_percent", r.reference_o2_dry * 100.0},
-      {"reference_o2", {{"text", r.reference_o2_text}, {"from_preset", r.reference_o2_from_preset}}},
-      {"o2_basis_percent", r.definition.report.o2_basis_percent},
-      {"normal_conditions", {{"key", r.normal->key}, {"description", r.normal->description}}},
+        {"o2_dry_percent", r.stack.o2_dry * 100.0},
+        {"moisture_percent", r.stack.h2o_wet * 100.0},
+        {"wet_flow_mol_per_s", r.stack.wet_mol_per_s},
+        {"wet_flow_Nm3_per_h", normal_m3_per_h(r.stack.wet_mol_per_s, *r.emissions.normal)},
+        {"dry_flow_Nm3_per_h", normal_m3_per_h(r.stack.dry_mol_per_s, *r.emissions.normal)},
+        {"actual_flow_m3_per_h", r.stack.actual_m3_per_s * kSecondsPerHour}}},
+      {"reference_o2_percent", r.emissions.reference_o2_dry * 100.0},
+      {"reference_o2", {{"text", r.emissions.reference_o2_text}, {"from_preset", r.emissions.reference_o2_from_preset}}},
+      {"o2_basis_percent", em::o2_basis_percent(r.definition.report.o2_basis)},
+      {"normal_conditions", {{"key", r.emissions.normal->key}, {"description", r.emissions.normal->description}}},
       {"emissions", emissions},
       {"limits", limits},
       {"measured", measured},
-      {"findings", r.findings},
-      {"warnings", r.warnings},
-      {"assumptions", r.assumptions},
-      {"cautions", r.cautions},
-      {"caution_keys", r.caution_keys},
+      {"findings", r.screening.findings},
+      {"warnings", r.screening.warnings},
+      {"assumptions", r.screening.assumptions},
+      {"cautions", r.screening.cautions},
+      {"caution_keys", r.screening.caution_keys},
   };
 }
 

@@ -3,7 +3,7 @@
 
 #include <nlohmann/json.hpp>
 
-#include "stackbound/cases/runner.hpp"
+#include "stackbound/cases/pipeline.hpp"
 
 namespace stackbound::render {
 

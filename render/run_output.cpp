@@ -1,13 +1,14 @@
 #include "stackbound/render/run_output.hpp"
 
 #include "stackbound/cases/run_document.hpp"
+#include "stackbound/render/finite_figures.hpp"
 #include "stackbound/render/report_renderers.hpp"
 #include "stackbound/render/run_json.hpp"
 
 namespace stackbound::render {
 
 std::string render_run(const cases::RunResult& result, const std::string& format) {
-  if (format == "json") return run_json(result).dump(2) + "\n";
+  if (format == "json") return json_text(run_json(result));
   return render_report(cases::run_document(result), format);
 }
 

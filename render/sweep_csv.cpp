@@ -1,7 +1,9 @@
 #include "stackbound/render/sweep_csv.hpp"
 
+#include <algorithm>
 #include <array>
 #include <charconv>
+#include <cmath>
 #include <iterator>
 #include <string>
 
@@ -9,6 +11,7 @@
 
 #include "stackbound/cases/run_document.hpp"
 #include "stackbound/cases/run_metrics.hpp"
+#include "stackbound/render/finite_figures.hpp"
 #include "stackbound/emissions/cautions.hpp"
 #include "stackbound/render/csv_cell.hpp"
 
@@ -49,7 +52,9 @@ void SweepCsvWriter::write_header(const RunResult* first) {
   for (const VarySpec& v : vary_) line += "," + csv_cell(sweep_parameter_label(v.parameter));
   line += ",status";
   if (first != nullptr) {
-    const std::vector<MetricColumn> columns = run_metric_columns(*first);
+    const bool reference_o2_varies = std::any_of(
+        vary_.begin(), vary_.end(), [](const VarySpec& v) { return v.parameter == SweepParameter::reference_o2; });
+    const std::vector<MetricColumn> columns = run_metric_columns(*first, reference_o2_varies);
     for (const MetricColumn& column : columns) line += "," + csv_cell(column.header);
     metric_count_ = columns.size();
   }
@@ -66,7 +71,12 @@ void SweepCsvWriter::write_row(const SweepPoint& point) {
   }
   if (point.result) {
     fmt::format_to(std::back_inserter(line), ",ok");
-    for (const double value : run_metric_values(*point.result)) {
+    const std::vector<double> values = run_metric_values(*point.result);
+    for (std::size_t m = 0; m < values.size(); ++m) {
+      const double value = values[m];
+      if (!std::isfinite(value)) {
+        throw NonFiniteFigure(fmt::format("sweep point {}: figure {} of the row is not finite", point.index + 1, m + 1));
+      }
       // to_chars: the same 8 significant digits as "{:.8g}", at a fraction of the cost per row.
       std::array<char, 32> digits{};
       const auto end = std::to_chars(digits.data(), digits.data() + digits.size(), value, std::chars_format::general, 8).ptr;

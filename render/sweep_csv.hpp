@@ -8,7 +8,7 @@
 #include <string_view>
 #include <vector>
 
-#include "stackbound/cases/runner.hpp"
+#include "stackbound/cases/pipeline.hpp"
 #include "stackbound/cases/sweep.hpp"
 
 namespace stackbound::render {

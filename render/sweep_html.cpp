@@ -1,5 +1,6 @@
 #include "stackbound/render/sweep_html.hpp"
 
+#include <algorithm>
 #include <cmath>
 
 #include <fmt/format.h>
@@ -16,8 +17,10 @@ void SweepHtmlCollector::add(const SweepPoint& point) {
   Row row{point.values, {}, point.error};
   if (point.result) {
     if (columns_.empty()) {
-      columns_ = run_metric_columns(*point.result);
-      reference_o2_ = emissions::percent_text(point.result->reference_o2_dry) + " % O2";
+      const bool varied = std::any_of(vary_.begin(), vary_.end(),
+                                      [](const VarySpec& v) { return v.parameter == SweepParameter::reference_o2; });
+      columns_ = run_metric_columns(*point.result, varied);
+      reference_o2_ = varied ? "reference O2" : emissions::percent_text(point.result->emissions.reference_o2_dry) + " % O2";
     }
     const std::vector<double> values = run_metric_values(*point.result);
     for (std::size_t k = 0; k < values.size() && k < columns_.size(); ++k) row.metrics[columns_[k].key] = values[k];

@@ -28,6 +28,7 @@ constexpr double kFahrenheitOffset_K = kCelsiusOffset_K - 32.0 * 5.0 / 9.0;
 
 // The normal-volume units resolve to moles through the molar volume of their conditions, which
 // needs a division at start-up; the table is therefore built once, then read only.
+// Long because it is the unit table itself, one line a unit; splitting it would only scatter the list.
 std::vector<UnitDefinition> build_table() {
   const NormalConditions* n0 = &normal_0C();
   const NormalConditions* n15 = &normal_15C();
@@ -299,12 +300,16 @@ std::string_view dimension_name(Dimension dimension) {
 
 std::span<const UnitDefinition> unit_table() { return table(); }
 
-ParsedQuantity parse_quantity(std::string_view text, std::string_view field,
-                              std::initializer_list<Dimension> accepted) {
-  const std::string_view body = trim(text);
-  if (body.empty()) reject(field, text, "the text is empty", accepted);
+namespace {
 
-  // The number is the leading run of number characters; all of it must be one decimal number.
+// The leading decimal number of `body` (the trimmed `text`): its run of number characters, which must
+// be one number, finite and in range; rejects the text otherwise.
+struct LeadingNumber {
+  double value = 0.0;
+  std::string_view token;  // the characters of the number
+};
+LeadingNumber leading_number(std::string_view body, std::string_view text, std::string_view field,
+                             std::initializer_list<Dimension> accepted) {
   const std::string_view unsigned_body = body.substr(body.front() == '+' || body.front() == '-' ? 1 : 0);
   if (starts_with_ignoring_case(unsigned_body, "nan") || starts_with_ignoring_case(unsigned_body, "inf")) {
     reject(field, text, "not a finite number", accepted);
@@ -334,60 +339,84 @@ ParsedQuantity parse_quantity(std::string_view text, std::string_view field,
            accepted);
   }
   if (!std::isfinite(number)) reject(field, text, "not a finite number", accepted);
+  return {number, token};
+}
 
-  // The unit: the rest, one symbol, nothing after it.
-  const std::string_view symbol = trim(body.substr(token.size()));
-  if (symbol.empty()) {
-    if (contains(accepted, D::dimensionless)) return {number, D::dimensionless, nullptr};
-    reject(field, text, "a unit is required", accepted);
+// Rejects `symbol`, which is no unit, with the likeliest reason: a second number after `token`, a
+// unit written with spaces, text after a unit, or an unknown symbol (with the nearest accepted one).
+[[noreturn]] void reject_unknown_unit(std::string_view symbol, std::string_view token, std::string_view text,
+                                      std::string_view field, std::initializer_list<Dimension> accepted) {
+  const std::string_view first_word = symbol.substr(0, std::min(symbol.find_first_of(kSpace), symbol.size()));
+  const std::string_view after_first = trim(symbol.substr(first_word.size()));
+  if (kNumberStart.find(first_word.front()) != std::string_view::npos) {
+    reject(field, text,
+           "found a second number \"" + std::string(first_word) + "\" after \"" + std::string(token) +
+               "\"; write one number followed by one unit",
+           accepted);
   }
-  const UnitDefinition* unit = find_unit(symbol);
-  if (unit == nullptr) {
-    const std::string_view first_word = symbol.substr(0, std::min(symbol.find_first_of(kSpace), symbol.size()));
-    const std::string_view after_first = trim(symbol.substr(first_word.size()));
-    if (kNumberStart.find(first_word.front()) != std::string_view::npos) {
-      reject(field, text,
-             "found a second number \"" + std::string(first_word) + "\" after \"" + std::string(token) +
-                 "\"; write one number followed by one unit",
-             accepted);
-    }
-    const std::string compact = without_spaces(symbol);
-    if (const UnitDefinition* spaced = find_unit(compact); spaced != nullptr && contains(accepted, spaced->dimension)) {
-      reject(field, text,
-             "unknown unit \"" + printable(symbol) + "\" (did you mean \"" + compact +
-                 "\"? unit symbols are written without spaces)",
-             accepted);
-    }
-    if (!after_first.empty() && find_unit(first_word) != nullptr) {
-      reject(field, text,
-             "unexpected text \"" + printable(after_first) + "\" after the unit \"" + std::string(first_word) + "\"",
-             accepted);
-    }
-    std::vector<std::string> candidates;
-    for (const Dimension dimension : accepted) {
-      for (const UnitDefinition& u : table()) {
-        if (u.dimension == dimension) candidates.emplace_back(u.symbol);
-      }
-    }
-    std::string problem = "unknown unit \"" + printable(symbol) + "\"";
-    if (const auto suggestion = nearest_name(symbol, candidates)) problem += " (did you mean \"" + *suggestion + "\"?)";
-    reject(field, text, problem, accepted);
+  const std::string compact = without_spaces(symbol);
+  if (const UnitDefinition* spaced = find_unit(compact); spaced != nullptr && contains(accepted, spaced->dimension)) {
+    reject(field, text,
+           "unknown unit \"" + printable(symbol) + "\" (did you mean \"" + compact +
+               "\"? unit symbols are written without spaces)",
+           accepted);
   }
-  if (!contains(accepted, unit->dimension)) {
-    reject(field, text, "\"" + std::string(symbol) + "\" is " + std::string(dimension_name(unit->dimension)), accepted);
+  if (!after_first.empty() && find_unit(first_word) != nullptr) {
+    reject(field, text,
+           "unexpected text \"" + printable(after_first) + "\" after the unit \"" + std::string(first_word) + "\"",
+           accepted);
   }
-  const double si = number * unit->factor_to_si + unit->offset_si;
+  std::vector<std::string> candidates;
+  for (const Dimension dimension : accepted) {
+    for (const UnitDefinition& u : table()) {
+      if (u.dimension == dimension) candidates.emplace_back(u.symbol);
+    }
+  }
+  std::string problem = "unknown unit \"" + printable(symbol) + "\"";
+  if (const auto suggestion = nearest_name(symbol, candidates)) problem += " (did you mean \"" + *suggestion + "\"?)";
+  reject(field, text, problem, accepted);
+}
+
+// `number` in `unit` converted to SI; rejected if not finite, or at or below zero for an absolute
+// temperature or pressure.
+double checked_si_value(double number, const UnitDefinition& unit, std::string_view text, std::string_view field,
+                        std::initializer_list<Dimension> accepted) {
+  const double si = number * unit.factor_to_si + unit.offset_si;
   if (!std::isfinite(si)) reject(field, text, "the value is out of range once converted to SI units", accepted);
-  if (unit->dimension == D::temperature && si <= 0.0) {
+  if (unit.dimension == D::temperature && si <= 0.0) {
     reject(field, text, fmt_number(si) + " K is at or below absolute zero; a temperature must be above 0 K", accepted);
   }
-  if (unit->dimension == D::pressure && si <= 0.0) {
+  if (unit.dimension == D::pressure && si <= 0.0) {
     reject(field, text,
            fmt_number(si) +
                " Pa is not above 0 Pa; an absolute pressure must be positive (gauge pressures are not accepted)",
            accepted);
   }
-  return {si, unit->dimension, unit};
+  return si;
+}
+
+}  // namespace
+
+ParsedQuantity parse_quantity(std::string_view text, std::string_view field,
+                              std::initializer_list<Dimension> accepted) {
+  const std::string_view body = trim(text);
+  if (body.empty()) reject(field, text, "the text is empty", accepted);
+
+  // The number is the leading run of number characters; all of it must be one decimal number.
+  const LeadingNumber number = leading_number(body, text, field, accepted);
+
+  // The unit: the rest, one symbol, nothing after it.
+  const std::string_view symbol = trim(body.substr(number.token.size()));
+  if (symbol.empty()) {
+    if (contains(accepted, D::dimensionless)) return {number.value, D::dimensionless, nullptr};
+    reject(field, text, "a unit is required", accepted);
+  }
+  const UnitDefinition* unit = find_unit(symbol);
+  if (unit == nullptr) reject_unknown_unit(symbol, number.token, text, field, accepted);
+  if (!contains(accepted, unit->dimension)) {
+    reject(field, text, "\"" + std::string(symbol) + "\" is " + std::string(dimension_name(unit->dimension)), accepted);
+  }
+  return {checked_si_value(number.value, *unit, text, field, accepted), unit->dimension, unit};
 }
 
 Temperature parse_temperature(std::string_view text, std::string_view field) {

@@ -7,9 +7,11 @@
 #include <filesystem>
 #include <fstream>
 #include <string>
+#include <variant>
 
 #include <gtest/gtest.h>
 
+#include "stackbound/emissions/basis.hpp"
 #include "tests/support/run_binary.hpp"
 #include "tests/support/tolerance.hpp"
 #include "stackbound/units/input_error.hpp"
@@ -106,6 +108,12 @@ TEST(CaseFile, BrokenCasesFailWithLocatedMessagesAndNoOutputFile) {
        ":4:8: fuel.gas = \"CH5\": unknown species"},
       {"composition far from 100 %", replaced(v, "  preset: natural_gas", "  gas: {CH4: 80 %}"),
        ":4:8: fuel.gas: the mole percentages sum to 80 %"},
+      {"composition as text in the command-line notation", replaced(v, "  preset: natural_gas", "  gas: CH4 95 %, N2 5 %"),
+       ":4:8: fuel.gas = \"CH4 95 %, N2 5 %\": a composition in a file is a YAML mapping: write {CH4: 95 %, N2: 5 %}"},
+      {"composition as text in the former notation", replaced(v, "  preset: natural_gas", "  gas: \"CH4=95, N2=5 %\""),
+       ":4:8: fuel.gas = \"CH4=95, N2=5 %\": a composition in a file is a YAML mapping: write {CH4: 95 %, N2: 5 %}"},
+      {"ultimate analysis as text", replaced(v, "  preset: natural_gas", "  ultimate: C 80 %, H 20"),
+       ":4:13: fuel.ultimate = \"C 80 %, H 20\": expected a mapping of percentages, e.g. {C: 75 %, H: 5 %"},
       {"relative humidity above 100 %", replaced(v, "operating_point:", "air:\n  relative_humidity: 150 %\noperating_point:"),
        ":7:22: air.relative_humidity = \"150 %\": must be between 0 % and 100 %"},
       {"limit for a pollutant not reported",
@@ -144,7 +152,7 @@ TEST(CaseFile, BrokenCasesFailWithLocatedMessagesAndNoOutputFile) {
 // Wrong if a missing case file were reported without its name.
 TEST(CaseFile, UnreadableFileIsNamed) {
   EXPECT_THROW_WITH(load_case("/nonexistent/plant.yaml"), units::InputError,
-                    "CASE = \"/nonexistent/plant.yaml\": cannot open the case file");
+                    "CASE = \"/nonexistent/plant.yaml\": no such case file");
 }
 
 // Wrong if the parser lost or rescaled a field: every number arrives in SI.
@@ -157,6 +165,70 @@ TEST(CaseFile, ValuesArriveInSiUnits) {
   EXPECT_TRUE(stackbound::testing::is_close(c.report.reference_o2_fraction.value_or(0.0), 0.03, 1e-12));
   // Source: CODATA 2018 molar volume 22.41396954 L/mol at 273.15 K, 101.325 kPa: 100 Nm3/h in mol/s.
   EXPECT_TRUE(stackbound::testing::is_close(c.fuel.feed_rate.value_si, 100.0 / 0.02241396954 / 3600.0, 1e-9));
+}
+
+// Wrong if a measured value, a stated limit, a choice or the plant type reached the run as text: the
+// loaded case holds them as concentrations on their bases, rates, enums and the preset itself.
+TEST(CaseFile, MeasuredValuesLimitsAndChoicesArriveTyped) {
+  std::string text = replaced(kValidCase, "report:", "stack:\n  measured:\n    co: 18 ppm, dry\n    moisture: 17 %\nreport:");
+  text = replaced(text, "  title: Test boiler (invented)\n", "  title: Test boiler (invented)\n  plant_type: ied-solid\n");
+  text += "  o2_basis: \"21\"\n  normal_conditions: 20C\n  pollutants: [CO, NOx]\n  limits:\n"
+          "    - {pollutant: NOx, limit: \"100 mg/Nm3, dry, O2=6%\"}\n    - {pollutant: CO, limit: 5 kg/h}\n";
+  const CaseDefinition c = parse_case(text, "typed.yaml");
+  ASSERT_NE(c.reference_o2_preset, nullptr);
+  EXPECT_EQ(c.reference_o2_preset->key, "ied-solid");
+  EXPECT_EQ(c.report.o2_basis, emissions::O2Basis::eu_21);
+  EXPECT_EQ(c.report.normal, &units::normal_20C());
+  ASSERT_EQ(c.report.pollutants.size(), 2u);
+  EXPECT_TRUE(c.report.pollutants[1].expressed_as_no2);
+  ASSERT_TRUE(c.stack.measured.co.has_value());
+  EXPECT_EQ(c.stack.measured.co->value.basis().moisture, emissions::Moisture::dry);
+  EXPECT_TRUE(stackbound::testing::is_close(c.stack.measured.co->value.value(), 18.0, 0.0));
+  EXPECT_EQ(c.stack.measured.co->text, "18 ppm, dry");
+  ASSERT_TRUE(c.stack.measured.moisture.has_value());
+  EXPECT_TRUE(stackbound::testing::is_close(c.stack.measured.moisture->fraction, 0.17, 1e-15));
+  ASSERT_EQ(c.report.limits.size(), 2u);
+  const auto* concentration = std::get_if<emissions::Concentration>(&c.report.limits[0].limit);
+  ASSERT_NE(concentration, nullptr);
+  EXPECT_TRUE(stackbound::testing::is_close(concentration->basis().reference.dry_fraction(), 0.06, 1e-15));
+  EXPECT_EQ(concentration->basis().unit.normal, &units::normal_20C()) << "the limit's normal conditions are the report's";
+  const auto* rate = std::get_if<emissions::RateLimit>(&c.report.limits[1].limit);
+  ASSERT_NE(rate, nullptr);
+  EXPECT_EQ(rate->kind, emissions::RateKind::mass_flow);
+  EXPECT_EQ(c.fuel.fuel.kind, FuelKind::preset);
+}
+
+// Wrong if what the runner used to find (a bad measured value or limit, a missing reference O2, an
+// unknown plant type) waited for a run: loading alone must refuse it, at its position.
+TEST(CaseFile, BadValuesAreRefusedAtLoadWithoutRunning) {
+  const std::string v = kValidCase;
+  EXPECT_THROW_WITH(parse_case(replaced(v, "report:", "stack:\n  measured:\n    co: about twenty\nreport:"), "f.yaml"),
+                    units::InputError, "f.yaml:12:9: stack.measured.co = \"about twenty\": no number found");
+  EXPECT_THROW_WITH(
+      parse_case(v + "  limits:\n    - pollutant: SO2\n      limit: 35 mg/Nm3, dry, O2=3%\n", "f.yaml"),
+      units::InputError, "f.yaml:14:14: report.limits: pollutant \"SO2\" is not among report.pollutants (CO, NO, NOx)");
+  EXPECT_THROW_WITH(parse_case(v + "  limits:\n    - pollutant: CO\n      limit: 250 mg/kWh\n", "f.yaml"),
+                    units::InputError,
+                    "f.yaml:14:14: report.limits[0].limit = \"250 mg/kWh\": a limit per useful output needs an efficiency");
+  EXPECT_THROW_WITH(parse_case(replaced(v, "reference_o2: 3 %", "reference_o2: preset"), "f.yaml"), units::InputError,
+                    "f.yaml:11:17: report.reference_o2 = \"preset\": needs case.plant_type");
+  EXPECT_THROW_WITH(parse_case(replaced(v, "report:\n  reference_o2: 3 %\n", ""), "f.yaml"), units::InputError,
+                    "f.yaml: report.reference_o2 = \"preset\": needs case.plant_type");
+  EXPECT_THROW_WITH(parse_case(v + "  pollutants: [CO, XYZ]\n", "f.yaml"), units::InputError,
+                    "f.yaml:12:20: report.pollutants = \"XYZ\": unknown pollutant");
+}
+
+// Wrong if the loader lost where a field was written: a run's error names the field path, and the
+// positions recorded at load are what turn it back into file:line:column.
+TEST(CaseFile, TheLoaderRecordsWhereEachFieldWasWritten) {
+  const LoadedCase loaded = parse_case_file(kValidCase, "f.yaml");
+  EXPECT_EQ(loaded.sources.location_of("fuel.feed_rate"), "f.yaml:5:14");
+  EXPECT_EQ(loaded.sources.location_of("firing.temperature"), "f.yaml:9:16");
+  EXPECT_EQ(loaded.sources.location_of("operating_point.excess_air"), "f.yaml:7:15");
+  // A section the file leaves out is reported at the file.
+  EXPECT_EQ(loaded.sources.location_of("air"), "f.yaml");
+  EXPECT_EQ(loaded.sources.location_of("stack.measured.co"), "f.yaml");
+  EXPECT_EQ(loaded.sources.location_of("nonsense"), std::nullopt);
 }
 
 }  // namespace

@@ -1,7 +1,7 @@
 // The main job end to end: every demo case in every format, the JSON contract, the wording and
 // cautions, and the runner against the same computation made by hand through the library.
 
-#include "stackbound/cases/runner.hpp"
+#include "stackbound/cases/pipeline.hpp"
 
 #include <filesystem>
 #include <fstream>
@@ -121,9 +121,9 @@ TEST(Runner, CaseFileAndLibraryCallsGiveIdenticalNumbers) {
   };
   const emissions::StackEmission by_hand = emissions::evaluate_stack_emission(input);
 
-  const auto nox = std::find_if(run.pollutants.begin(), run.pollutants.end(), [](const auto& p) { return p.name == "NOx"; });
-  ASSERT_NE(nox, run.pollutants.end());
-  EXPECT_TRUE(is_close(run.firing_temperature_K, eq.temperature_K, 0.0));
+  const auto nox = std::find_if(run.emissions.pollutants.begin(), run.emissions.pollutants.end(), [](const auto& p) { return p.name == "NOx"; });
+  ASSERT_NE(nox, run.emissions.pollutants.end());
+  EXPECT_TRUE(is_close(run.fired.temperature_K, eq.temperature_K, 0.0));
   EXPECT_TRUE(is_close(nox->emission.ppmvd.value(), by_hand.ppmvd.value(), 0.0));
   EXPECT_TRUE(is_close(nox->emission.ppmvd_at_reference.value(), by_hand.ppmvd_at_reference.value(), 0.0));
   EXPECT_TRUE(is_close(nox->emission.mg_per_Nm3_at_reference.result.value(),
@@ -138,7 +138,7 @@ TEST(Runner, JsonOutputEqualsTheLibraryResult) {
   const auto printed = run_stackbound({"run", example("gas_boiler.yaml"), "--format", "json"});
   ASSERT_EQ(printed.exit_code, 0) << printed.err;
   const nlohmann::json json = nlohmann::json::parse(printed.out);
-  for (const PollutantBound& p : run.pollutants) {
+  for (const PollutantBound& p : run.emissions.pollutants) {
     EXPECT_TRUE(is_close(json["emissions"][p.name]["ppmvd_at_ref_o2"].get<double>(),
                          p.emission.ppmvd_at_reference.value(), 1e-15));
     EXPECT_TRUE(is_close(json["emissions"][p.name]["kg_per_h"].get<double>(), p.emission.mass_rate.value() * 3600.0,
@@ -153,7 +153,7 @@ TEST(Runner, JsonOutputEqualsTheLibraryResult) {
 // dry air; humidity leaves the dry basis unchanged).
 TEST(Runner, Method19AndMassBalanceAgreeForAir) {
   const RunResult run = run_case(load_case(example("gas_boiler.yaml")), builtin_species());
-  for (const PollutantBound& p : run.pollutants) {
+  for (const PollutantBound& p : run.emissions.pollutants) {
     EXPECT_TRUE(is_close(p.emission.method19.kg_per_J, p.emission.direct.kg_per_J, 0.01)) << p.name;
   }
 }
@@ -161,8 +161,8 @@ TEST(Runner, Method19AndMassBalanceAgreeForAir) {
 // Wrong if a measured CO far above the equilibrium bound were not flagged as incomplete combustion.
 TEST(Runner, MeasuredCoFarAboveTheBoundIsFlaggedAsIncompleteCombustion) {
   const RunResult run = run_case(load_case(example("wood_chip_boiler.yaml")), builtin_species());
-  const auto co = std::find_if(run.measured.begin(), run.measured.end(), [](const auto& m) { return m.quantity == "CO"; });
-  ASSERT_NE(co, run.measured.end());
+  const auto co = std::find_if(run.screening.measured.begin(), run.screening.measured.end(), [](const auto& m) { return m.quantity == "CO"; });
+  ASSERT_NE(co, run.screening.measured.end());
   EXPECT_GT(co->measured, kCoAboveBoundFactor * co->model);
   EXPECT_NE(co->finding.find("incomplete combustion"), std::string::npos);
 }
@@ -173,12 +173,12 @@ TEST(Runner, MeasuredO2InconsistentWithTheOperatingPointIsFlagged) {
   std::ifstream in(example("gas_boiler.yaml"));
   std::string text((std::istreambuf_iterator<char>(in)), std::istreambuf_iterator<char>());
   const RunResult consistent = run_case(parse_case(text, "gas_boiler.yaml"), builtin_species());
-  ASSERT_FALSE(consistent.measured.empty());
-  EXPECT_EQ(consistent.measured.front().quantity, "O2");
-  EXPECT_EQ(consistent.measured.front().finding, "");
+  ASSERT_FALSE(consistent.screening.measured.empty());
+  EXPECT_EQ(consistent.screening.measured.front().quantity, "O2");
+  EXPECT_EQ(consistent.screening.measured.front().finding, "");
   text.replace(text.find("o2: 3.0 %, dry"), 14, "o2: 6.0 %, dry");
   const RunResult inconsistent = run_case(parse_case(text, "gas_boiler.yaml"), builtin_species());
-  EXPECT_NE(inconsistent.measured.front().finding.find("differs from the"), std::string::npos);
+  EXPECT_NE(inconsistent.screening.measured.front().finding.find("differs from the"), std::string::npos);
 }
 
 }  // namespace

@@ -44,7 +44,7 @@ TEST(SpeciesFile, UnknownElementIsRefused) {
 
 TEST(SpeciesFile, MissingFileIsNamed) {
   EXPECT_THROW_WITH(read_species_file("/nonexistent/x.yaml"), units::InputError,
-                    "--species-file = \"/nonexistent/x.yaml\": cannot open the file");
+                    "--species-file = \"/nonexistent/x.yaml\": no such species file");
 }
 
 }  // namespace

@@ -26,9 +26,30 @@ using stackbound::testing::run_stackbound;
 std::string example(const char* name) { return std::string(STACKBOUND_SOURCE_DIR) + "/cases/examples/" + name; }
 
 const PollutantBound& bound(const RunResult& run, const std::string& name) {
-  const auto found = std::find_if(run.pollutants.begin(), run.pollutants.end(), [&](const auto& p) { return p.name == name; });
-  if (found == run.pollutants.end()) throw std::runtime_error("no pollutant " + name);
+  const auto found = std::find_if(run.emissions.pollutants.begin(), run.emissions.pollutants.end(), [&](const auto& p) { return p.name == name; });
+  if (found == run.emissions.pollutants.end()) throw std::runtime_error("no pollutant " + name);
   return *found;
+}
+
+// How many points of a sweep ran each stage (the others kept the previous point's result).
+struct StageCounts {
+  std::size_t resolve = 0;
+  std::size_t fire = 0;
+  std::size_t stack = 0;
+  std::size_t emissions = 0;
+};
+
+StageCounts stages_run(const std::vector<SweepPoint>& points) {
+  StageCounts counts;
+  for (const SweepPoint& point : points) {
+    if (!point.result) continue;
+    const StagesRun& run = point.result->stages_run;
+    counts.resolve += run.resolve ? 1 : 0;
+    counts.fire += run.fire ? 1 : 0;
+    counts.stack += run.stack ? 1 : 0;
+    counts.emissions += run.emissions ? 1 : 0;
+  }
+  return counts;
 }
 
 std::vector<SweepPoint> collect(const CaseDefinition& base, const std::vector<VarySpec>& vary, unsigned threads) {
@@ -65,6 +86,90 @@ TEST(Sweep, RowsEqualTheSamePointsRunOneAtATime) {
   }
 }
 
+// Wrong if a reference-O2 sweep solved an equilibrium (or re-resolved the case) per point: the
+// reference O2 is read first by the emissions stage, so one worker fires once and every later point
+// keeps the firing state and stack gas, across batch boundaries too. Also wrong if the kept results
+// gave other figures than a full run of the same point.
+TEST(Sweep, AReferenceO2SweepFiresOnceAndMatchesFullRuns) {
+  const CaseDefinition base = load_case(example("gas_boiler.yaml"));
+  const std::vector<VarySpec> vary{parse_vary("reference_o2=0%:15%:10")};
+  const std::vector<SweepPoint> points = collect(base, vary, 1);
+  ASSERT_EQ(points.size(), 10u);
+  const StageCounts counts = stages_run(points);
+  EXPECT_EQ(counts.resolve, 1u);
+  EXPECT_EQ(counts.fire, 1u);
+  EXPECT_EQ(counts.stack, 1u);
+  EXPECT_EQ(counts.emissions, 10u);
+  for (const SweepPoint& point : points) {
+    ASSERT_TRUE(point.result.has_value()) << point.error;
+    CaseDefinition single = base;
+    apply_parameter(single, SweepParameter::reference_o2, point.values[0]);
+    const RunResult alone = run_case(single, builtin_species());
+    EXPECT_TRUE(is_close(point.result->emissions.reference_o2_dry, point.values[0], 0.0));
+    for (const char* name : {"CO", "NO", "NOx"}) {
+      EXPECT_TRUE(is_close(bound(*point.result, name).emission.ppmvd_at_reference.value(),
+                           bound(alone, name).emission.ppmvd_at_reference.value(), 1e-12))
+          << name << " at point " << point.index;
+      EXPECT_TRUE(is_close(bound(*point.result, name).emission.mg_per_Nm3_at_reference.result.value(),
+                           bound(alone, name).emission.mg_per_Nm3_at_reference.result.value(), 1e-12))
+          << name << " at point " << point.index;
+    }
+  }
+}
+
+// Wrong if a temperature sweep kept a firing state it must recompute (one fire stage per point), or
+// re-resolved the fuel and operating point, which the firing temperature does not change.
+TEST(Sweep, ATemperatureSweepFiresAtEveryPointAndResolvesOnce) {
+  const CaseDefinition base = load_case(example("gas_boiler.yaml"));
+  const std::vector<SweepPoint> points = collect(base, {parse_vary("firing_temperature=1500K:1900K:9")}, 1);
+  const StageCounts counts = stages_run(points);
+  EXPECT_EQ(counts.resolve, 1u);
+  EXPECT_EQ(counts.fire, 9u);
+  EXPECT_EQ(counts.emissions, 9u);
+}
+
+// Wrong if a two-parameter grid re-ran the resolve stage where only the faster (temperature)
+// parameter changed, or kept it where the excess air changed; with two workers each starts afresh.
+TEST(Sweep, AGridReResolvesOnlyWhereTheExcessAirChanges) {
+  const CaseDefinition base = load_case(example("gas_boiler.yaml"));
+  const std::vector<VarySpec> vary{parse_vary("excess_air=5%:45%:3"), parse_vary("firing_temperature=1600K:1900K:4")};
+  const StageCounts one_worker = stages_run(collect(base, vary, 1));
+  EXPECT_EQ(one_worker.resolve, 3u);
+  EXPECT_EQ(one_worker.fire, 12u);
+  SweepOptions options;
+  options.threads = 2;
+  options.batch_points = 12;  // one batch: worker 1 takes points 0-5, worker 2 points 6-11
+  std::vector<SweepPoint> points;
+  run_sweep(base, vary, builtin_species(), [&](const SweepPoint& p) { points.push_back(p); }, options);
+  // Worker 1: excess air 5 % (new), 25 % (changed); worker 2: 25 % (its first point), 45 % (changed).
+  EXPECT_EQ(stages_run(points).resolve, 4u);
+}
+
+// Wrong if the point after a failed one took stages from the failed point (it has none) instead of
+// from the last point that ran, or re-fired although it differs from that point in the reference O2
+// only; or if the kept firing state gave other figures than a full run.
+TEST(Sweep, APointAfterAFailureKeepsTheStagesOfTheLastPointThatRan) {
+  const CaseDefinition base = load_case(example("gas_boiler.yaml"));
+  // 4000 K lies outside the species data (3500 K): points 1 and 3 fail.
+  const std::vector<VarySpec> vary{parse_vary("reference_o2=3%:6%:2"), parse_vary("firing_temperature=3000K:4000K:2")};
+  const std::vector<SweepPoint> points = collect(base, vary, 1);
+  ASSERT_EQ(points.size(), 4u);
+  ASSERT_TRUE(points[0].result.has_value()) << points[0].error;
+  EXPECT_FALSE(points[1].result.has_value());
+  ASSERT_TRUE(points[2].result.has_value()) << points[2].error;
+  EXPECT_FALSE(points[3].result.has_value());
+  EXPECT_TRUE(points[0].result->stages_run.fire);
+  EXPECT_FALSE(points[2].result->stages_run.resolve);
+  EXPECT_FALSE(points[2].result->stages_run.fire);
+  EXPECT_TRUE(points[2].result->stages_run.emissions);
+  CaseDefinition single = base;
+  apply_parameter(single, SweepParameter::reference_o2, 0.06);
+  apply_parameter(single, SweepParameter::firing_temperature, 3000.0);
+  const RunResult alone = run_case(single, builtin_species());
+  EXPECT_TRUE(is_close(bound(*points[2].result, "NO").emission.ppmvd_at_reference.value(),
+                       bound(alone, "NO").emission.ppmvd_at_reference.value(), 1e-12));
+}
+
 // Wrong if the equilibrium NO bound did not rise with firing temperature at fixed excess air:
 // N2 + O2 = 2 NO is endothermic (about +180 kJ/mol), so by van 't Hoff its K grows with T.
 TEST(Sweep, NoBoundRisesWithFiringTemperature) {
@@ -99,7 +204,7 @@ TEST(Sweep, AdiabaticFlameTemperaturePeaksNearStoichiometric) {
   std::size_t hottest = 0;
   for (std::size_t i = 0; i < points.size(); ++i) {
     ASSERT_TRUE(points[i].result.has_value()) << points[i].error;
-    if (points[i].result->firing_temperature_K > points[hottest].result->firing_temperature_K) hottest = i;
+    if (points[i].result->fired.temperature_K > points[hottest].result->fired.temperature_K) hottest = i;
   }
   const double excess_air_at_peak = points[hottest].values[0];
   EXPECT_GE(excess_air_at_peak, -0.10);
@@ -125,6 +230,8 @@ TEST(Sweep, BadVarySpecsAreRefusedWithTheirRule) {
                     "the case's fuel is not a blend");
   EXPECT_THROW_WITH(check_sweep(stated, {parse_vary("excess_air=5%:45%:3"), parse_vary("flue_o2=2%:4%:3")}),
                     units::InputError, "excess_air and flue_o2 both set the operating point");
+  EXPECT_THROW_WITH(check_sweep(stated, {parse_vary("reference_o2=25%:30%:2")}), units::InputError,
+                    "--vary reference_o2 = 25 %: must be between 0 % and 20 %");
 }
 
 // Wrong if one failing point stopped the sweep, lost its parameters, or the exit code hid the failure.

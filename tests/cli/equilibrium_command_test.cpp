@@ -24,7 +24,7 @@ using stackbound::testing::run_stackbound;
 
 // Wrong if the command printed values other than the library's, or missed a documented JSON key.
 TEST(EquilibriumCommand, JsonCarriesTheLibraryResult) {
-  const ProcessResult run = run_stackbound({"equilibrium", "--feed", "CH4=1, O2=2.4, N2=9.03", "--temperature", "1800K",
+  const ProcessResult run = run_stackbound({"equilibrium", "--feed", "CH4 + 2.4 O2 + 9.03 N2", "--temperature", "1800K",
                                             "--pressure", "2 bar", "--format", "json"});
   ASSERT_EQ(run.exit_code, 0) << run.err;
   EXPECT_EQ(run.err, "");
@@ -49,7 +49,7 @@ TEST(EquilibriumCommand, JsonCarriesTheLibraryResult) {
 // Wrong if --adiabatic did not solve HP from the feed temperature, or --species did not restrict.
 TEST(EquilibriumCommand, AdiabaticFromTheFeedTemperatureWithRestrictedProducts) {
   const ProcessResult run =
-      run_stackbound({"equilibrium", "--feed", "H2=1, O2=0.5, N2=1.88", "--adiabatic", "--feed-temperature", "400K",
+      run_stackbound({"equilibrium", "--feed", "H2 + 0.5 O2 + 1.88 N2", "--adiabatic", "--feed-temperature", "400K",
                       "--species", "H2O,H2,O2,OH,H,O,N2", "--format", "json"});
   ASSERT_EQ(run.exit_code, 0) << run.err;
   const nlohmann::json json = nlohmann::json::parse(run.out);
@@ -68,7 +68,7 @@ TEST(EquilibriumCommand, AdiabaticFromTheFeedTemperatureWithRestrictedProducts) 
 // Wrong if a heat loss did not lower the flame temperature.
 TEST(EquilibriumCommand, HeatLossLowersTheAdiabaticTemperature) {
   const auto temperature = [](std::vector<std::string> extra) {
-    std::vector<std::string> arguments{"equilibrium", "--feed",   "CH4=1, O2=2, N2=7.52",
+    std::vector<std::string> arguments{"equilibrium", "--feed",   "CH4 + 2 O2 + 7.52 N2",
                                        "--adiabatic", "--format", "json"};
     arguments.insert(arguments.end(), extra.begin(), extra.end());
     const ProcessResult run = run_stackbound(arguments);
@@ -80,7 +80,7 @@ TEST(EquilibriumCommand, HeatLossLowersTheAdiabaticTemperature) {
 
 // Wrong if the text report lost its header lines, its table or the note on what the numbers are.
 TEST(EquilibriumCommand, TextReportHasHeaderTableAndNote) {
-  const ProcessResult run = run_stackbound({"equilibrium", "--feed", "CH4=1, O2=0.6, N2=2.3", "--temperature", "700K"});
+  const ProcessResult run = run_stackbound({"equilibrium", "--feed", "CH4 + 0.6 O2 + 2.3 N2", "--temperature", "700K"});
   ASSERT_EQ(run.exit_code, 0) << run.err;
   for (const char* fragment : {"Temperature 700.00 K", "Pressure 101325 Pa (1 atm)", "Newton iterations",
                                "element-balance residual", "graphite present", "species", "mole fraction",
@@ -94,8 +94,22 @@ TEST(EquilibriumCommand, HelpShowsExamples) {
   const ProcessResult run = run_stackbound({"equilibrium", "--help"});
   EXPECT_EQ(run.exit_code, 0);
   EXPECT_NE(run.out.find("Examples:"), std::string::npos);
-  EXPECT_NE(run.out.find("stackbound equilibrium --feed \"CH4=1, O2=2.4, N2=9.03\" --temperature 1800K"),
+  EXPECT_NE(run.out.find("stackbound equilibrium --feed \"CH4 + 2.4 O2 + 9.03 N2\" --temperature 1800K"),
             std::string::npos);
+}
+
+// Wrong if the reactant notation (omitted coefficient, leading-point decimal, exponent, C(gr)) did
+// not reach the solver as the amounts written.
+TEST(EquilibriumCommand, ReactantNotationGivesTheFeedAmounts) {
+  const ProcessResult run = run_stackbound(
+      {"equilibrium", "--feed", "C(gr) + .5 O2 + 1e-3 NO+2 N2", "--temperature", "1500K", "--format", "json"});
+  ASSERT_EQ(run.exit_code, 0) << run.err;
+  const nlohmann::json feed = nlohmann::json::parse(run.out).at("feed_moles");
+  EXPECT_EQ(feed.size(), 4u);
+  EXPECT_EQ(feed.at("C(gr)").get<double>(), 1.0);
+  EXPECT_EQ(feed.at("O2").get<double>(), 0.5);
+  EXPECT_EQ(feed.at("NO").get<double>(), 1e-3);
+  EXPECT_EQ(feed.at("N2").get<double>(), 2.0);
 }
 
 // Wrong if bad input were answered, or its message did not name the option and the value.
@@ -105,21 +119,27 @@ TEST(EquilibriumCommand, BadInputIsAnErrorNamingTheOption) {
     const char* fragment;
   };
   const Case cases[] = {
-      {{"--feed", "CH4=x", "--temperature", "1800K"}, "--feed CH4 = \"x\""},
-      {{"--feed", "CH5=1", "--temperature", "1800K"}, "--feed = \"CH5\": unknown species"},
-      {{"--feed", "CH4=-1", "--temperature", "1800K"}, "--feed = \"CH4=-1\": the amount must be >= 0 mol"},
-      {{"--feed", "CH4=0", "--temperature", "1800K"}, "--feed: every amount is zero"},
-      {{"--feed", "CH4", "--temperature", "1800K"}, "--feed = \"CH4\": expected NAME=AMOUNT"},
-      {{"--feed", "CH4=1, O2=2", "--temperature", "5000K"}, "--temperature = 5000 K: outside the data range"},
-      {{"--feed", "CH4=1, O2=2", "--temperature", "1800K", "--species", "CO2,O2"},
+      {{"--feed", "CH4 + x O2", "--temperature", "1800K"},
+       "--feed = \"CH4 + x O2\": term 2 \"x O2\" (column 7): two formulas in one term: write \"x + O2\""},
+      {{"--feed", "CH5 + 2 O2", "--temperature", "1800K"},
+       "--feed = \"CH5 + 2 O2\": term 1 \"CH5\" (column 1): unknown species \"CH5\"; did you mean \"CH4\"?"},
+      {{"--feed", "CH4 + -1 O2", "--temperature", "1800K"}, "the coefficient \"-1\" must be > 0 mol"},
+      {{"--feed", "0 CH4", "--temperature", "1800K"}, "the coefficient \"0\" must be > 0 mol"},
+      {{"--feed", "CH4 + 2O2", "--temperature", "1800K"}, "must be followed by a blank: write \"2 O2\""},
+      {{"--feed", "CH4 + 2 O2 +", "--temperature", "1800K"}, "term 3 is empty: nothing after the last \"+\""},
+      {{"--feed", "CH4 + O2 + CH4", "--temperature", "1800K"}, "CH4 is already term 1"},
+      {{"--feed", "CH4=1, O2=2.4", "--temperature", "1800K"},
+       "--feed = \"CH4=1, O2=2.4\": the NAME=AMOUNT form is not accepted; write \"CH4 + 2.4 O2\""},
+      {{"--feed", "CH4 + 2 O2", "--temperature", "5000K"}, "--temperature = 5000 K: outside the data range"},
+      {{"--feed", "CH4 + 2 O2", "--temperature", "1800K", "--species", "CO2,O2"},
        "--species = \"CO2,O2\": no product contains H"},
-      {{"--feed", "CO=1", "--temperature", "1800K", "--species", "CO2,O2"},
+      {{"--feed", "CO", "--temperature", "1800K", "--species", "CO2,O2"},
        "cannot hold the feed's elements in its proportions"},
-      {{"--feed", "CH4=1, O2=2"}, "--temperature: missing"},
-      {{"--feed", "CH4=1, O2=2", "--temperature", "1800K", "--adiabatic"}, "not both"},
-      {{"--feed", "CH4=1, O2=2", "--temperature", "1800K", "--feed-temperature", "400K"},
+      {{"--feed", "CH4 + 2 O2"}, "--temperature: missing"},
+      {{"--feed", "CH4 + 2 O2", "--temperature", "1800K", "--adiabatic"}, "not both"},
+      {{"--feed", "CH4 + 2 O2", "--temperature", "1800K", "--feed-temperature", "400K"},
        "--feed-temperature = \"400K\": applies only with --adiabatic"},
-      {{"--feed", "CH4=1, O2=2", "--adiabatic", "--heat-loss", "120%"}, "--heat-loss = \"120%\""},
+      {{"--feed", "CH4 + 2 O2", "--adiabatic", "--heat-loss", "120%"}, "--heat-loss = \"120%\""},
   };
   for (const Case& c : cases) {
     std::vector<std::string> arguments{"equilibrium"};

@@ -87,7 +87,7 @@ TEST(FuelFile, ErrorsNameTheFileLineAndField) {
   EXPECT_THROW_WITH(parse_fuel_file("fuel:\n  preset: coal\n", "f.yaml", db()), units::InputError,
                     "f.yaml:2:11: fuel.preset = \"coal\": unknown fuel preset");
   EXPECT_THROW_WITH(read_fuel_file("/nonexistent/fuel.yaml", db()), units::InputError,
-                    "FILE = \"/nonexistent/fuel.yaml\": cannot open the fuel file");
+                    "FILE = \"/nonexistent/fuel.yaml\": no such fuel file");
 }
 
 // ---------------------------------------------------------------------------------------------------
@@ -95,8 +95,8 @@ TEST(FuelFile, ErrorsNameTheFileLineAndField) {
 
 // Wrong if the JSON lacked a documented key or printed values other than the library's.
 TEST(FuelCommand, JsonCarriesTheDocumentedKeysWithLibraryValues) {
-  const ProcessResult run =
-      run_stackbound({"fuel", "--gas", "CH4=93, C2H6=4, CO2=1, N2=2", "--excess-air", "15%", "--format", "json"});
+  const ProcessResult run = run_stackbound(
+      {"fuel", "--gas", "CH4 93 %, C2H6 4 %, CO2 1 %, N2 2 %", "--excess-air", "15%", "--format", "json"});
   ASSERT_EQ(run.exit_code, 0) << run.err;
   EXPECT_EQ(run.err, "");
   const nlohmann::json json = nlohmann::json::parse(run.out);
@@ -140,6 +140,39 @@ TEST(FuelCommand, TextShowsUnitsSourceAndCaution) {
   }
 }
 
+// Wrong if the certificate notation of --gas and --ultimate did not give the fuel of the same
+// percentages in the library.
+TEST(FuelCommand, AnalysisNotationGivesTheLibraryFuel) {
+  const ProcessResult gas = run_stackbound({"fuel", "--gas", "CH4 95%, C2H6 3 %, N2 2 %", "--format", "json"});
+  ASSERT_EQ(gas.exit_code, 0) << gas.err;
+  core::GasFuelSpec spec;
+  spec.composition_percent = {{"CH4", 95.0}, {"C2H6", 3.0}, {"N2", 2.0}};
+  const core::Fuel expected_gas = core::Fuel::gas(spec, db());
+  EXPECT_TRUE(is_close(nlohmann::json::parse(gas.out).at("hhv_MJ_per_kg").get<double>(),
+                       expected_gas.hhv_J_per_kg() * 1e-6, 1e-12));
+
+  const ProcessResult solid =
+      run_stackbound({"fuel", "--ultimate", "C 75 %, H 5 %, N 1.5 %, S 2.3 %, ash 9.5 %, moisture 8 %",
+                      "--analysis-basis", "dry", "--hhv", "31.4 MJ/kg", "--format", "json"});
+  ASSERT_EQ(solid.exit_code, 0) << solid.err;
+  core::CondensedFuelSpec condensed;
+  condensed.analysis.basis = core::AnalysisBasis::dry;
+  condensed.analysis.carbon_percent = 75.0;
+  condensed.analysis.hydrogen_percent = 5.0;
+  condensed.analysis.nitrogen_percent = 1.5;
+  condensed.analysis.sulfur_percent = 2.3;
+  condensed.analysis.ash_percent = 9.5;
+  condensed.analysis.moisture_percent = 8.0;
+  condensed.heating_value =
+      core::MeasuredHeatingValue{core::HeatingValueKind::higher, 31.4e6, core::AnalysisBasis::dry};
+  const core::Fuel expected_solid = core::Fuel::condensed(condensed, db());
+  const nlohmann::json json = nlohmann::json::parse(solid.out);
+  EXPECT_TRUE(is_close(json.at("hhv_MJ_per_kg").get<double>(), expected_solid.hhv_J_per_kg() * 1e-6, 1e-12));
+  EXPECT_TRUE(is_close(json.at("fuel").at("as_fired_mass_percent").at("moisture").get<double>(), 8.0, 1e-12));
+  EXPECT_TRUE(is_close(json.at("fuel").at("as_fired_mass_percent").at("O").get<double>(),
+                       expected_solid.as_fired_analysis().oxygen_percent, 1e-12));
+}
+
 // Wrong if bad input ran on, crashed, or failed without naming the field.
 TEST(FuelCommand, BadInputExitsWithCodeTwoNamingTheField) {
   struct Case {
@@ -147,11 +180,26 @@ TEST(FuelCommand, BadInputExitsWithCodeTwoNamingTheField) {
     const char* fragment;
   };
   const Case cases[] = {
-      {{"fuel", "--gas", "CH4=80, C2H6=4"}, "--gas: the mole percentages sum to 84 %"},
-      {{"fuel", "--gas", "CH4=96, Ethane=4"}, "--gas = \"Ethane\": unknown species"},
-      {{"fuel", "--gas", "CH4=104, N2=-4"}, "--gas.CH4 = 104 %: must be <= 100 %"},
-      {{"fuel", "--gas", "CH4=100", "--flue-o2", "21%"}, "--flue-o2 = 21 % (dry): the flue O2 must be"},
-      {{"fuel", "--ultimate", "C=75, H=5, O=20"}, "--ultimate: a liquid or solid fuel needs a heating value"},
+      {{"fuel", "--gas", "CH4 80 %, C2H6 4 %"}, "--gas: the mole percentages sum to 84 %"},
+      {{"fuel", "--gas", "CH4 96 %, Ethane 4 %"},
+       "--gas = \"CH4 96 %, Ethane 4 %\": item 2 \"Ethane 4 %\" (column 11): unknown species \"Ethane\""},
+      {{"fuel", "--gas", "CH4 96 %, c2h6 4 %"}, "unknown species \"c2h6\"; did you mean \"C2H6\"?"},
+      {{"fuel", "--gas", "CH4 104 %, N2 0 %"}, "--gas.CH4 = 104 %: must be <= 100 %"},
+      {{"fuel", "--gas", "CH4 95 %, N2 -5 %"}, "the percentage \"-5\" is negative"},
+      {{"fuel", "--gas", "CH4 95, N2 5 %"}, "item 1 \"CH4 95\" (column 1): the \"%\" is missing: write \"CH4 95 %\""},
+      {{"fuel", "--gas", "CH4 95 %, N2 5 %,"}, "item 3 is empty: nothing after the last \",\""},
+      {{"fuel", "--gas", "CH4 95 %, N2 3 %, CH4 2 %"}, "CH4 is already item 1"},
+      {{"fuel", "--gas", "C(gr) 100 %"}, "C(gr) is a condensed species"},
+      {{"fuel", "--gas", "CH4=95, C2H6=3, N2=2"},
+       "--gas = \"CH4=95, C2H6=3, N2=2\": the NAME=PERCENT form is not accepted; write \"CH4 95 %, C2H6 3 %, N2 2 %\""},
+      {{"fuel", "--gas", "CH4 100 %", "--flue-o2", "21%"}, "--flue-o2 = 21 % (dry): the flue O2 must be"},
+      {{"fuel", "--ultimate", "C 75 %, H 5 %, O 20 %"}, "--ultimate: a liquid or solid fuel needs a heating value"},
+      {{"fuel", "--ultimate", "C 75 %, H 5 %, O 30 %", "--estimate", "boie"},
+       "ultimate-analysis percentages (C, H, O, N, S, ash, moisture) sum to 110 %"},
+      {{"fuel", "--ultimate", "C=75, H=5, O=20", "--estimate", "boie"},
+       "--ultimate = \"C=75, H=5, O=20\": the NAME=PERCENT form is not accepted; write \"C 75 %, H 5 %, O 20 %\""},
+      {{"fuel", "--ultimate", "C 75 %, Ash 5 %, O 20 %", "--estimate", "boie"},
+       "item 2 \"Ash 5 %\" (column 9): unknown component \"Ash\"; did you mean \"ash\"?"},
       {{"fuel", "--preset", "bituminous_coal", "--rate", "100 Nm3/h"}, "--rate = \"100 Nm3/h\""},
       {{"fuel"}, "give exactly one fuel"},
   };

@@ -9,41 +9,15 @@
 #include <string>
 #include <vector>
 
-#include "stackbound/cases/species_file.hpp"
 #include "stackbound/core/element_amounts.hpp"
 #include "stackbound/core/elements.hpp"
 #include "stackbound/core/equilibrium.hpp"
-#include "stackbound/units/constants.hpp"
+#include "tests/core/equilibrium_grid.hpp"
 
 namespace stackbound::core {
 namespace {
 
-const SpeciesDatabase& db() { return cases::builtin_species(); }
-
-struct Fuel {
-  const char* name;
-  std::vector<SpeciesAmount> species;  // one "unit" of fuel
-  double oxygen_demand;                // mol O2 for complete combustion of one unit
-};
-
-// Invented fuels: pure gases, a coal-like solid (graphite + H2 + water + NH3 + H2S), a sour gas,
-// an ammonia fuel and a helium-diluted methane.
-std::vector<Fuel> fuels() {
-  return {
-      {"H2", {{"H2", 1.0}}, 0.5},
-      {"CH4", {{"CH4", 1.0}}, 2.0},
-      {"C3H8", {{"C3H8", 1.0}}, 5.0},
-      {"CO", {{"CO", 1.0}}, 0.5},
-      {"C2H2", {{"C2H2", 1.0}}, 2.5},
-      {"CH3OH", {{"CH3OH", 1.0}}, 1.5},
-      {"coal-like",
-       {{"C(gr)", 0.8}, {"H2", 0.35}, {"H2O", 0.05}, {"NH3", 0.02}, {"H2S", 0.01}},
-       0.8 + 0.175 + 0.015 + 0.015},
-      {"sour gas", {{"CH4", 0.9}, {"H2S", 0.1}, {"CO2", 0.05}}, 1.8 + 0.15},
-      {"NH3", {{"NH3", 1.0}}, 0.75},
-      {"CH4 in He", {{"CH4", 1.0}, {"He", 3.0}}, 2.0},
-  };
-}
+using grid::db;
 
 struct GridSummary {
   int points = 0;
@@ -73,43 +47,24 @@ void check_point(const EquilibriumResult& r, const ElementAmounts& b, GridSummar
   if (r.graphite_present) ++summary.graphite_points;
 }
 
-const double kPhis[] = {0.1, 0.3, 0.5, 0.8, 0.95, 1.0, 1.05, 1.2, 1.5, 2.0, 3.0, 4.0};
-const double kPressures_atm[] = {0.01, 0.1, 1.0, 10.0, 100.0};
-
-// Wrong if any point of the 10 x 12 x 18 x 5 = 10 800 point grid failed to converge, broke an
+// Wrong if any point of the 10 x 12 x 17 x 5 = 10 200 point grid failed to converge, broke an
 // element balance beyond 1e-10, or produced a negative / NaN amount; every solve starts cold.
 TEST(EquilibriumRobustness, EveryPointOfTheColdStartGridConverges) {
-  std::vector<double> temperatures_K;
-  for (double T = 300.0; T < 3500.0; T += 200.0) temperatures_K.push_back(T);
-  temperatures_K.push_back(3500.0);  // the data's upper limit
   GridSummary summary;
-  for (const Fuel& fuel : fuels()) {
-    for (const double phi : kPhis) {
-      std::vector<SpeciesAmount> feed = fuel.species;
-      const double o2 = fuel.oxygen_demand / phi;
-      // Invented dry air: O2 + 3.727 N2 + 0.0446 Ar.
-      feed.push_back({"O2", o2});
-      feed.push_back({"N2", 3.727 * o2});
-      feed.push_back({"Ar", 0.0446 * o2});
-      const ElementAmounts b = element_amounts(db(), feed);
-      const EquilibriumSolver solver(db(), b);
-      for (const double T : temperatures_K) {
-        for (const double P_atm : kPressures_atm) {
-          ++summary.points;
-          try {
-            const EquilibriumResult r = solver.solve_tp(b, T, P_atm * units::kStandardAtmosphere_Pa);
-            if (r.iterations > 35)
-              std::cout << "SLOW " << fuel.name << " " << phi << " " << T << " " << P_atm << " " << r.iterations
-                        << "\n";
-            check_point(r, b, summary);
-          } catch (const std::exception& error) {
-            ++summary.failures;
-            ADD_FAILURE() << fuel.name << " phi " << phi << " T " << T << " P " << P_atm << " atm: " << error.what();
-          }
-        }
-      }
+  grid::for_each_cold_point([&](const grid::Point& point, const EquilibriumSolver& solver, const ElementAmounts& b) {
+    ++summary.points;
+    try {
+      const EquilibriumResult r = solver.solve_tp(b, point.temperature_K, point.pressure_Pa());
+      if (r.iterations > 35)
+        std::cout << "SLOW " << point.fuel << " " << point.phi << " " << point.temperature_K << " "
+                  << point.pressure_atm << " " << r.iterations << "\n";
+      check_point(r, b, summary);
+    } catch (const std::exception& error) {
+      ++summary.failures;
+      ADD_FAILURE() << point.fuel << " phi " << point.phi << " T " << point.temperature_K << " P "
+                    << point.pressure_atm << " atm: " << error.what();
     }
-  }
+  });
   EXPECT_GE(summary.points, 10000);
   EXPECT_EQ(summary.failures, 0);
   EXPECT_EQ(summary.bad_amounts, 0);
@@ -124,37 +79,23 @@ TEST(EquilibriumRobustness, EveryPointOfTheColdStartGridConverges) {
 // Wrong if warm starts from the previous grid point (a sweep) ever failed or broke a balance, also
 // across jumps in T, P and feed.
 TEST(EquilibriumRobustness, AWarmStartedSweepOverTheGridConverges) {
-  ElementAmounts all_elements;
-  for (const char* symbol : {"C", "H", "O", "N", "S", "Ar", "He"}) all_elements.moles[element_index(symbol)] = 1.0;
-  const EquilibriumSolver solver(db(), all_elements);
   GridSummary summary;
   EquilibriumResult previous;
   bool have_previous = false;
-  for (const Fuel& fuel : fuels()) {
-    for (double phi = 0.1; phi <= 4.0; phi *= 1.25) {
-      std::vector<SpeciesAmount> feed = fuel.species;
-      const double o2 = fuel.oxygen_demand / phi;
-      feed.push_back({"O2", o2});
-      feed.push_back({"N2", 3.727 * o2});
-      feed.push_back({"Ar", 0.0446 * o2});
-      const ElementAmounts b = element_amounts(db(), feed);
-      for (double T = 300.0; T <= 3500.0; T += 150.0) {
-        for (const double P_atm : {0.01, 1.0, 100.0}) {
-          ++summary.points;
-          try {
-            EquilibriumResult r =
-                solver.solve_tp(b, T, P_atm * units::kStandardAtmosphere_Pa, have_previous ? &previous : nullptr);
-            check_point(r, b, summary);
-            previous = std::move(r);
-            have_previous = true;
-          } catch (const std::exception& error) {
-            ++summary.failures;
-            ADD_FAILURE() << fuel.name << " phi " << phi << " T " << T << " P " << P_atm << " atm: " << error.what();
-          }
-        }
-      }
+  grid::for_each_sweep_point([&](const grid::Point& point, const EquilibriumSolver& solver, const ElementAmounts& b) {
+    ++summary.points;
+    try {
+      EquilibriumResult r =
+          solver.solve_tp(b, point.temperature_K, point.pressure_Pa(), have_previous ? &previous : nullptr);
+      check_point(r, b, summary);
+      previous = std::move(r);
+      have_previous = true;
+    } catch (const std::exception& error) {
+      ++summary.failures;
+      ADD_FAILURE() << point.fuel << " phi " << point.phi << " T " << point.temperature_K << " P "
+                    << point.pressure_atm << " atm: " << error.what();
     }
-  }
+  });
   EXPECT_GT(summary.points, 3000);
   EXPECT_EQ(summary.failures, 0);
   EXPECT_EQ(summary.bad_amounts, 0);

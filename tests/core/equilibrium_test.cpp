@@ -188,7 +188,7 @@ TEST(ElementAmounts, RejectsUnknownNegativeAndEmptyFeeds) {
                     "--feed = \"CH5\": unknown species");
   const std::vector<SpeciesAmount> negative{{"CH4", -1.0}};
   EXPECT_THROW_WITH((void)element_amounts(db(), negative), units::InputError,
-                    "feed = \"CH4=-1\": the amount must be a finite number >= 0 mol");
+                    "feed.CH4 = -1 mol: the amount must be a finite number >= 0 mol");
   const std::vector<SpeciesAmount> not_a_number{{"CH4", std::nan("")}};
   EXPECT_THROW_WITH((void)element_amounts(db(), not_a_number), units::InputError, "must be a finite number");
   const std::vector<SpeciesAmount> empty;

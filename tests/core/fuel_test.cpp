@@ -330,18 +330,5 @@ TEST(FuelPresets, EveryPresetBuildsAndNamesItsSource) {
                     "fuel.preset = \"natural-gas\": unknown fuel preset; did you mean \"natural_gas\"?");
 }
 
-// Wrong if composition text were misread (percent sign, spaces) or a malformed item accepted.
-TEST(ParseComposition, ReadsSpeciesPercentPairsAndRefusesMalformedItems) {
-  const auto items = parse_composition(" CH4=93 %, C2H6 = 4,CO2=1, N2=2", "--gas");
-  ASSERT_EQ(items.size(), 4u);
-  EXPECT_EQ(items[1].first, "C2H6");
-  EXPECT_TRUE(is_close(items[0].second, 93.0, 1e-15));
-  EXPECT_TRUE(is_close(items[1].second, 4.0, 1e-15));
-  EXPECT_THROW_WITH(parse_composition("CH4=93, C2H6", "--gas"), units::InputError,
-                    "--gas = \"CH4=93, C2H6\": item \"C2H6\" is not SPECIES=PERCENT");
-  EXPECT_THROW_WITH(parse_composition("CH4=ninety", "--gas"), units::InputError, "with a number");
-  EXPECT_THROW_WITH(parse_composition("CH4=93,", "--gas"), units::InputError, "item \"\"");
-}
-
 }  // namespace
 }  // namespace stackbound::core

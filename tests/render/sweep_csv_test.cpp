@@ -1,5 +1,6 @@
 // The sweep CSV writer: rows are written as points arrive, failed points keep their place, and the
-// header takes its result columns from the first point that ran.
+// header takes its result columns from the first point that ran (naming no single reference O2 when
+// the sweep varies it).
 
 #include <gtest/gtest.h>
 
@@ -64,6 +65,20 @@ TEST(SweepCsv, FailedFirstPointWaitsForTheHeaderOfTheFirstPointThatRan) {
   EXPECT_TRUE(rows[2].starts_with("2,20,ok,")) << rows[2];
   EXPECT_EQ(field_count(rows[2]), field_count(rows[0])) << "a row has a different number of columns from the header";
   EXPECT_EQ(field_count(rows[1]), field_count(rows[0])) << "the failed row's error is not in the error column";
+}
+
+// Wrong if a sweep of the reference O2 labelled its columns with the first point's O2, which the
+// later rows are not at.
+TEST(SweepCsv, AReferenceO2SweepNamesNoSingleO2InItsHeader) {
+  CaseDefinition definition = load_case(std::string(STACKBOUND_SOURCE_DIR) + "/cases/examples/gas_boiler.yaml");
+  const std::vector<VarySpec> vary{parse_vary("reference_o2=3%:15%:2")};
+  std::string out;
+  SweepCsvWriter writer([&out](std::string_view text) { out += text; }, vary);
+  apply_parameter(definition, vary[0].parameter, 0.03);
+  writer.add(SweepPoint{0, {0.03}, run_case(definition, builtin_species()), ""});
+  writer.finish();
+  EXPECT_NE(out.find("CO bound [ppmvd @ reference O2]"), std::string::npos) << out;
+  EXPECT_EQ(out.find("@ 3 % O2"), std::string::npos) << out;
 }
 
 }  // namespace

@@ -29,8 +29,10 @@ inline std::string shell_quote(const std::string& argument) {
   return quoted + "'";
 }
 
-// Runs the stackbound binary with `arguments`, capturing stdout through the pipe and stderr in a file.
-inline ProcessResult run_stackbound(const std::vector<std::string>& arguments) {
+// Runs the stackbound binary with `arguments`, capturing stdout through the pipe and stderr in a file;
+// in `working_directory` when one is given (relative paths in the arguments are then read from there).
+inline ProcessResult run_stackbound(const std::vector<std::string>& arguments,
+                                    const std::filesystem::path& working_directory = {}) {
   std::string err_template = (std::filesystem::temp_directory_path() / "stackbound_test_stderr_XXXXXX").string();
   const int err_descriptor = ::mkstemp(err_template.data());
   if (err_descriptor < 0) {
@@ -39,7 +41,9 @@ inline ProcessResult run_stackbound(const std::vector<std::string>& arguments) {
   }
   ::close(err_descriptor);
   const std::filesystem::path err_file = err_template;
-  std::string command = shell_quote(STACKBOUND_BINARY);
+  std::string command;
+  if (!working_directory.empty()) command = "cd " + shell_quote(working_directory.string()) + " && ";
+  command += shell_quote(STACKBOUND_BINARY);
   for (const std::string& argument : arguments) command += " " + shell_quote(argument);
   command += " 2>" + shell_quote(err_file.string()) + " </dev/null";
   ProcessResult run;

@@ -1,0 +1,66 @@
+#pragma once
+// Stage 5 of a run, screening: everything after the emission figures. The bounds against the stated
+// limits, the measured values beside the model on a common basis, the findings a reader must look at
+// (where they disagree, and what the model itself shows: soot, rich firing, a stack near the dew
+// point), and the assumptions and cautions every report carries.
+
+#include <string>
+#include <vector>
+
+#include "stackbound/cases/case_definition.hpp"
+#include "stackbound/cases/stage_emissions.hpp"
+#include "stackbound/cases/stage_fire.hpp"
+#include "stackbound/cases/stage_resolve.hpp"
+#include "stackbound/cases/stage_stack.hpp"
+#include "stackbound/core/species_database.hpp"
+#include "stackbound/emissions/limit_screening.hpp"
+
+namespace stackbound::cases {
+
+struct LimitScreening {
+  std::string pollutant;
+  std::string limit_text;
+  emissions::ScreeningResult result;
+};
+
+// A measured value set beside the equilibrium bound on the same basis.
+struct MeasuredComparison {
+  std::string quantity;       // "O2", "CO", "NO", "NOx", "moisture"
+  std::string measured_text;  // as stated in the case file
+  std::string basis;          // the common basis of the two numbers
+  double measured = 0.0;
+  double model = 0.0;  // the bound (CO, NO, NOx) or the model's value (O2, moisture)
+  std::string unit;
+  std::string finding;  // empty when consistent
+};
+
+struct Screening {
+  std::vector<LimitScreening> limits;
+  std::vector<MeasuredComparison> measured;
+  std::vector<std::string> findings;  // what the reader must look at
+  std::vector<std::string> warnings;  // notes from the fuel and combustion steps
+  std::vector<std::string> assumptions;
+  std::vector<std::string> cautions;  // texts, in print order
+  std::vector<std::string> caution_keys;
+};
+
+// The results of the stages before screening, which it reads.
+struct ScreeningInput {
+  const CaseDefinition& definition;
+  const ResolvedCase& resolved;
+  const FiringState& fired;
+  const StackGas& stack;
+  const EmissionFigures& figures;
+};
+
+// Runs the stage. `database`: the species data of the run, named in the assumptions. Errors name the
+// field of the limit or measured value concerned ("report.limits[1].limit: ..."; source_map.hpp).
+Screening screening_stage(const ScreeningInput& input, const core::SpeciesDatabase& database);
+
+// Thresholds of the findings (our choices, common practice, no source; printed in the report).
+inline constexpr double kO2MismatchPoints = 0.5;        // measured vs model flue O2, percentage points (dry)
+inline constexpr double kMoistureMismatchPoints = 2.0;  // measured vs model moisture, percentage points
+inline constexpr double kCoAboveBoundFactor = 2.0;      // measured CO above this multiple of the bound
+inline constexpr double kDewPointMarginK = 10.0;        // stack within this of the water dew point
+
+}  // namespace stackbound::cases
