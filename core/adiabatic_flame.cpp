@@ -17,7 +17,7 @@ constexpr double kColdStartTemperature_K = 2000.0;
 
 double enthalpy_298_J_per_mol(const Species& species) {
   const double T = units::kReferenceTemperature_K;
-  return kR * T * species.h_over_RT(T);
+  return kR * T * species.h_over_RT(units::kelvin(T));
 }
 
 const Species& required(const SpeciesDatabase& db, std::string_view formula, std::string_view field) {
@@ -44,7 +44,7 @@ EquilibriumResult EquilibriumSolver::solve_hp(const ElementAmounts& b, double ta
   // 300 K admit 298.15 K but not the gap between).
   const auto covered = [this](double T) {
     for (const Candidate& c : candidates_) {
-      if (!c.species->covers(T)) T = std::max(T, c.species->range().low_K);
+      if (!c.species->covers(units::kelvin(T))) T = std::max(T, c.species->range().low.value());
     }
     return T;
   };

@@ -56,7 +56,7 @@ double oxygen_beyond_co(const ElementMoles& e) { return e[kO] - 2.0 * e[kS] - e[
 // Equilibrium constant of CO + H2O = CO2 + H2 (dimensionless, no mole change) from the species data.
 double shift_constant(double temperature_K, const SpeciesDatabase& database) {
   const auto g = [&](std::string_view formula) {
-    return database.at(formula, "species data for the water-gas shift").g_over_RT(temperature_K);
+    return database.at(formula, "species data for the water-gas shift").g_over_RT(units::kelvin(temperature_K));
   };
   return std::exp(-(g("CO2") + g("H2") - g("CO") - g("H2O")));
 }

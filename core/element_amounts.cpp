@@ -86,9 +86,9 @@ double feed_enthalpy_J(const SpeciesDatabase& db, std::span<const SpeciesAmount>
   double enthalpy_J = 0.0;
   for (std::size_t i = 0; i < feed.size(); ++i) {
     if (feed[i].moles == 0.0) continue;
-    if (!species[i]->covers(temperature_K)) {
+    if (!species[i]->covers(units::kelvin(temperature_K))) {
       throw units::InputError(fmt::format("{} temperature = {:g} K: outside the data range {:g}-{:g} K of {}", field,
-                                          temperature_K, species[i]->range().low_K, species[i]->range().high_K,
+                                          temperature_K, species[i]->range().low.value(), species[i]->range().high.value(),
                                           species[i]->formula()));
     }
     enthalpy_J += feed[i].moles * units::kGasConstant_J_per_mol_K * temperature_K *

@@ -149,7 +149,7 @@ double Oxidant::enthalpy_J_per_mol(const SpeciesDatabase& database) const {
   for (std::size_t i = 0; i < kOxidantSpeciesCount; ++i) {
     if (wet_[i] == 0.0) continue;
     h += wet_[i] * units::kGasConstant_J_per_mol_K * T *
-         database.at(kOxidantSpeciesNames[i], "oxidant species").h_over_RT(T);
+         database.at(kOxidantSpeciesNames[i], "oxidant species").h_over_RT(temperature_);
   }
   return h;
 }

@@ -27,7 +27,7 @@ Fuel methane() {
 }
 
 double h298(std::string_view formula) {
-  return units::kGasConstant_J_per_mol_K * 298.15 * db().at(formula).h_over_RT(298.15);
+  return units::kGasConstant_J_per_mol_K * 298.15 * db().at(formula).h_over_RT(units::kelvin(298.15));
 }
 
 Oxidant humid_enriched_air() {
@@ -154,7 +154,7 @@ TEST(Burn, SubStoichiometricFlueGasHoldsCoAndH2AtShiftEquilibrium) {
   EXPECT_GT(co, 0.0);
   EXPECT_GT(h2, 0.0);
   EXPECT_TRUE(is_close(r.flue.amount(FlueSpecies::O2), 0.0, 0.0, 1e-15));
-  const auto g = [](const char* s) { return db().at(s).g_over_RT(kDefaultShiftTemperature_K); };
+  const auto g = [](const char* s) { return db().at(s).g_over_RT(units::kelvin(kDefaultShiftTemperature_K)); };
   const double K = std::exp(-(g("CO2") + g("H2") - g("CO") - g("H2O")));
   EXPECT_TRUE(is_close(co2 * h2 / (co * h2o), K, 1e-9));
   bool warned = false;

@@ -88,12 +88,12 @@ double gibbs_change_over_RT(const std::vector<std::string>& species, const std::
   for (std::size_t i = 0; i < species.size(); ++i) {
     const Species& s = db().at(species[i]);
     if (!s.is_gas()) {
-      change += delta[i] * s.g_over_RT(T);
+      change += delta[i] * s.g_over_RT(units::kelvin(T));
       continue;
     }
     if (moles[i] <= 0.0) continue;
     const double chemical_potential =
-        s.g_over_RT(T) + std::log(moles[i] / gas) + std::log(P / units::kStandardStatePressure_Pa);
+        s.g_over_RT(units::kelvin(T)) + std::log(moles[i] / gas) + std::log(P / units::kStandardStatePressure_Pa);
     const double ln_fraction_ratio = std::log1p(delta[i] / moles[i]) - ln_total_ratio;
     // (n + d)(mu + ln ratio) - n mu
     change += delta[i] * (chemical_potential + ln_fraction_ratio) + moles[i] * ln_fraction_ratio;
@@ -373,7 +373,7 @@ TEST(Equilibrium, GraphiteAppearsExactlyWhenItsChemicalPotentialTestSaysSo) {
   for (const double phi : {0.8, 1.0, 1.5, 2.0, 2.5, 3.0, 4.0}) {
     for (const double T : {700.0, 1000.0, 1400.0, 2000.0}) {
       const Solved s = solve(methane_air(phi), T);
-      const double affinity = graphite.g_over_RT(T) - s.result.element_potentials[carbon];
+      const double affinity = graphite.g_over_RT(units::kelvin(T)) - s.result.element_potentials[carbon];
       if (s.result.graphite_present) {
         ++present;
         EXPECT_GT(s.result.moles_of("C(gr)"), 0.0);
@@ -400,7 +400,7 @@ TEST(Equilibrium, TraceSpeciesFarBelowOnePartIn1e30AreExactAndPositive) {
   for (std::size_t i = 0; i < s.result.species.size(); ++i) {
     const Species& species = db().at(s.result.species[i]);
     if (!species.is_gas()) continue;
-    double ln_x = -species.g_over_RT(800.0) - std::log(kAtm_Pa / units::kStandardStatePressure_Pa);
+    double ln_x = -species.g_over_RT(units::kelvin(800.0)) - std::log(kAtm_Pa / units::kStandardStatePressure_Pa);
     for (std::size_t k = 0; k < kElementCount; ++k) {
       ln_x += species.atoms_of(known_elements()[k].symbol) * s.result.element_potentials[k];
     }

@@ -18,7 +18,7 @@ const SpeciesDatabase& db() { return cases::builtin_species(); }
 
 double weight_kg(const char* symbol) { return element_by_symbol(symbol).atomic_weight_g_per_mol * 1e-3; }
 double h298(const char* formula) {
-  return units::kGasConstant_J_per_mol_K * 298.15 * db().at(formula).h_over_RT(298.15);
+  return units::kGasConstant_J_per_mol_K * 298.15 * db().at(formula).h_over_RT(units::kelvin(298.15));
 }
 
 Fuel gas(std::vector<std::pair<std::string, double>> composition, CompositionBasis basis = CompositionBasis::mole) {

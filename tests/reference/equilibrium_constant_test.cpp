@@ -57,7 +57,7 @@ struct Reaction {
 // ln K from our species data at T.
 double our_ln_K(const Reaction& reaction, double T) {
   double ln_K = 0.0;
-  for (const Participant& p : reaction.species) ln_K -= p.nu * db().at(p.formula).g_over_RT(T);
+  for (const Participant& p : reaction.species) ln_K -= p.nu * db().at(p.formula).g_over_RT(units::kelvin(T));
   return ln_K;
 }
 
