@@ -347,8 +347,8 @@ void EquilibriumSolver::check_temperature(double temperature_K) const {
       throw units::InputError(fmt::format(
           "temperature = {:g} K: outside the data range of product {} ({:g}-{:g} K); the product candidates "
           "together cover {:g}-{:g} K",
-          temperature_K, c.species->formula(), c.species->range().low.value(), c.species->range().high.value(), min_temperature_K_,
-          max_temperature_K_));
+          temperature_K, c.species->formula(), c.species->range().low.value(), c.species->range().high.value(),
+          min_temperature_K_, max_temperature_K_));
     }
   }
 }
@@ -356,8 +356,10 @@ void EquilibriumSolver::check_temperature(double temperature_K) const {
 // ---------------------------------------------------------------------------------------------------
 // The TP solve
 
-EquilibriumResult EquilibriumSolver::solve_tp(const ElementAmounts& b, double temperature_K, double pressure_Pa,
-                                              const EquilibriumResult* warm_start) const {
+EquilibriumResult EquilibriumSolver::solve_tp(const ElementAmounts& b, units::Temperature temperature,
+                                              units::Pressure pressure, const EquilibriumResult* warm_start) const {
+  const double temperature_K = temperature.value();
+  const double pressure_Pa = pressure.value();
   try {
     return EquilibriumWork::solve(*this, b, temperature_K, pressure_Pa, warm_start);
   } catch (const ConvergenceError&) {

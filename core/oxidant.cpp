@@ -68,7 +68,7 @@ Humidity Humidity::relative(double relative_humidity, units::Temperature ambient
   if (!std::isfinite(p) || p <= 0.0) {
     throw units::InputError(fmt::format("{}: ambient pressure {:.6g} Pa must be above 0", field, p));
   }
-  const double saturation = water_vapour_pressure_Pa(T, field + " (ambient temperature)");
+  const double saturation = water_vapour_pressure(ambient_temperature, field + " (ambient temperature)").value();
   const double partial = relative_humidity * saturation;
   if (partial >= p) {
     throw units::InputError(fmt::format("{} = {:.4g} % at {:.2f} K: the water vapour pressure ({:.6g} Pa) would reach "

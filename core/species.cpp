@@ -38,8 +38,8 @@ Species::Species(SpeciesRecord record) : record_(std::move(record)) {
   const double high_K = record_.range.high.value();
   require(std::isfinite(low_K) && std::isfinite(high_K) && low_K > 0.0 && low_K <= mid_K && mid_K <= high_K &&
               low_K < high_K,
-          name, fmt::format("the temperature range {}-{}-{} K must satisfy 0 < low <= mid <= high", low_K, mid_K,
-                            high_K));
+          name,
+          fmt::format("the temperature range {}-{}-{} K must satisfy 0 < low <= mid <= high", low_K, mid_K, high_K));
   for (const Nasa7* set : {&record_.below_mid, &record_.above_mid}) {
     for (double a : *set) {
       require(std::isfinite(a), name, "a NASA coefficient is not a finite number");

@@ -54,10 +54,14 @@ TEST(SpeciesCommand, JsonValuesAreTheLibraryValues) {
     EXPECT_EQ(json.at("name").get<std::string>(), c.name);
     EXPECT_TRUE(is_close(json.at("temperature_K").get<double>(), T, 1e-14)) << c.name;
     // JSON numbers are written with round-trip precision, so only arithmetic rounding may differ.
-    EXPECT_TRUE(is_close(json.at("cp_J_per_mol_K").get<double>(), R * species.cp_over_R(units::kelvin(T)), 1e-12)) << c.name;
-    EXPECT_TRUE(is_close(json.at("h_J_per_mol").get<double>(), R * T * species.h_over_RT(units::kelvin(T)), 1e-12)) << c.name;
-    EXPECT_TRUE(is_close(json.at("s_J_per_mol_K").get<double>(), R * species.s_over_R(units::kelvin(T)), 1e-12)) << c.name;
-    EXPECT_TRUE(is_close(json.at("g_J_per_mol").get<double>(), R * T * species.g_over_RT(units::kelvin(T)), 1e-12)) << c.name;
+    EXPECT_TRUE(is_close(json.at("cp_J_per_mol_K").get<double>(), R * species.cp_over_R(units::kelvin(T)), 1e-12))
+        << c.name;
+    EXPECT_TRUE(is_close(json.at("h_J_per_mol").get<double>(), R * T * species.h_over_RT(units::kelvin(T)), 1e-12))
+        << c.name;
+    EXPECT_TRUE(is_close(json.at("s_J_per_mol_K").get<double>(), R * species.s_over_R(units::kelvin(T)), 1e-12))
+        << c.name;
+    EXPECT_TRUE(is_close(json.at("g_J_per_mol").get<double>(), R * T * species.g_over_RT(units::kelvin(T)), 1e-12))
+        << c.name;
     // And g = h - T s holds in what the user reads.
     EXPECT_TRUE(is_close(json.at("g_J_per_mol").get<double>(),
                          json.at("h_J_per_mol").get<double>() - T * json.at("s_J_per_mol_K").get<double>(), 1e-9, 1e-6))

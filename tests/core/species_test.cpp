@@ -34,7 +34,8 @@ TEST(SpeciesData, NamesAreCaseSensitiveAndTyposGetASuggestion) {
 TEST(Species, EvaluationOutsideTheRangeIsAnErrorNamingTheRange) {
   EXPECT_THROW_WITH((void)db().at("CO2").cp_over_R(units::kelvin(4000.0)), units::InputError,
                     "species CO2: temperature 4000 K is outside its data range 200-3500 K");
-  EXPECT_THROW_WITH((void)db().at("NO").h_over_RT(units::kelvin(150.0)), units::InputError, "outside its data range 200-6000 K");
+  EXPECT_THROW_WITH((void)db().at("NO").h_over_RT(units::kelvin(150.0)), units::InputError,
+                    "outside its data range 200-6000 K");
 }
 
 // Wrong if SO2-type records (fitted from 300 K) could not be used for ambient feeds at 298.15 K,
