@@ -182,6 +182,11 @@ class Fuel {
   [[nodiscard]] std::vector<std::pair<std::string, double>> mole_fractions() const;
   // Molar mass of a gas fuel, kg/mol; nothing for fuels with a liquid or solid part.
   [[nodiscard]] std::optional<double> molar_mass_kg_per_mol() const;
+  [[nodiscard]] std::optional<units::MolarMass> molar_mass() const {
+    const std::optional<double> value = molar_mass_kg_per_mol();
+    if (!value) return std::nullopt;
+    return units::kilograms_per_mole(*value);
+  }
 
   // Specific enthalpy (per kg of fuel) at `temperature` on the species data's scale. Gas species are
   // evaluated from `database` (an InputError if T is outside a species' range); the liquid/solid part

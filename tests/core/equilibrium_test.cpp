@@ -28,7 +28,6 @@ namespace {
 using stackbound::testing::is_close;
 
 constexpr double kAtm_Pa = units::kStandardAtmosphere_Pa;
-constexpr double kR = units::kGasConstant_J_per_mol_K;
 // The tool promises element balances to 1e-10 relative (issue 3).
 constexpr double kElementBalance = 1e-10;
 
@@ -232,6 +231,21 @@ TEST(EquilibriumSolver, DefaultProductsAreEverySpeciesOfTheFeedsElementsGasesFir
 }
 
 // Wrong if a product list that cannot hold the feed were accepted and failed later, or silently.
+// Wrong if the typed boundary changed a number on the way in or out: the quantities must carry exactly
+// the doubles of the raw fields, and the solve at typed T and P must land on them.
+TEST(EquilibriumSolver, TypedStateCarriesTheRawNumbersExactly) {
+  const Solved s = solve(methane_air(1.0), 1900.0, 2.0 * kAtm_Pa);
+  EXPECT_EQ(s.result.temperature().value(), 1900.0);
+  EXPECT_EQ(s.result.pressure().value(), 2.0 * kAtm_Pa);
+  EXPECT_EQ(s.result.temperature().value(), s.result.temperature_K);
+  EXPECT_EQ(s.result.pressure().value(), s.result.pressure_Pa);
+  EXPECT_EQ(s.result.enthalpy().value(), s.result.enthalpy_J);
+  EXPECT_EQ(s.result.total_gas_amount().value(), s.result.total_gas_moles);
+  const EquilibriumSolver solver(db(), s.b);
+  EXPECT_EQ(solver.max_temperature().value(), 3500.0);
+  EXPECT_LT(solver.min_temperature().value(), solver.max_temperature().value());
+}
+
 TEST(EquilibriumSolver, RejectsProductListsThatCannotHoldTheFeed) {
   const ElementAmounts b = element_amounts(db(), methane_air(1.0));
   EXPECT_THROW_WITH(EquilibriumSolver(db(), b, {"CO2", "H2O", "N2", "Xx"}), units::InputError,
