@@ -36,7 +36,8 @@ struct Problem {
   explicit Problem(const std::vector<core::SpeciesAmount>& feed)
       : b(core::element_amounts(stackbound::cases::builtin_species(), feed)),
         solver(stackbound::cases::builtin_species(), b),
-        enthalpy_J(core::feed_enthalpy_J(stackbound::cases::builtin_species(), feed, 298.15)) {}
+        enthalpy_J(core::feed_enthalpy(stackbound::cases::builtin_species(), feed, stackbound::units::kelvin(298.15))
+                       .value()) {}
 };
 
 // Cold start: each solve starts from the uniform initial estimate. T cycles over 1200-2400 K so
@@ -46,7 +47,8 @@ void tp_cold(benchmark::State& state, const std::vector<core::SpeciesAmount>& fe
   double temperature_K = 1200.0;
   int iterations = 0;
   for (auto _ : state) {
-    const core::EquilibriumResult result = problem.solver.solve_tp(problem.b, temperature_K, kAtm_Pa);
+    const core::EquilibriumResult result = problem.solver.solve_tp(problem.b, stackbound::units::kelvin(temperature_K),
+                                                                   stackbound::units::pascals(kAtm_Pa));
     iterations += result.iterations;
     keep(result.total_gas_moles);
     temperature_K = temperature_K >= 2400.0 ? 1200.0 : temperature_K + 7.0;
@@ -58,11 +60,13 @@ void tp_cold(benchmark::State& state, const std::vector<core::SpeciesAmount>& fe
 void tp_warm(benchmark::State& state, const std::vector<core::SpeciesAmount>& feed) {
   const Problem problem(feed);
   double temperature_K = 1200.0;
-  core::EquilibriumResult previous = problem.solver.solve_tp(problem.b, temperature_K, kAtm_Pa);
+  core::EquilibriumResult previous =
+      problem.solver.solve_tp(problem.b, stackbound::units::kelvin(temperature_K), stackbound::units::pascals(kAtm_Pa));
   int iterations = 0;
   for (auto _ : state) {
     temperature_K = temperature_K >= 2400.0 ? 1200.0 : temperature_K + 7.0;
-    core::EquilibriumResult result = problem.solver.solve_tp(problem.b, temperature_K, kAtm_Pa, &previous);
+    core::EquilibriumResult result = problem.solver.solve_tp(problem.b, stackbound::units::kelvin(temperature_K),
+                                                             stackbound::units::pascals(kAtm_Pa), &previous);
     iterations += result.iterations;
     keep(result.total_gas_moles);
     previous = std::move(result);
@@ -84,7 +88,8 @@ void BM_HpMethaneAirCold(benchmark::State& state) {
   const Problem problem(methane_air());
   int iterations = 0;
   for (auto _ : state) {
-    const core::EquilibriumResult result = problem.solver.solve_hp(problem.b, problem.enthalpy_J, kAtm_Pa);
+    const core::EquilibriumResult result = problem.solver.solve_hp(
+        problem.b, stackbound::units::joules(problem.enthalpy_J), stackbound::units::pascals(kAtm_Pa));
     iterations += result.iterations;
     keep(result.temperature_K);
   }
@@ -95,13 +100,15 @@ BENCHMARK(BM_HpMethaneAirCold);
 // HP warm-started from the previous flame while the feed's enthalpy steps (a preheat sweep).
 void BM_HpMethaneAirWarm(benchmark::State& state) {
   const Problem problem(methane_air());
-  core::EquilibriumResult previous = problem.solver.solve_hp(problem.b, problem.enthalpy_J, kAtm_Pa);
+  core::EquilibriumResult previous = problem.solver.solve_hp(problem.b, stackbound::units::joules(problem.enthalpy_J),
+                                                             stackbound::units::pascals(kAtm_Pa));
   double extra_J = 0.0;
   int iterations = 0;
   for (auto _ : state) {
     extra_J = extra_J >= 40000.0 ? 0.0 : extra_J + 1000.0;
     core::EquilibriumResult result =
-        problem.solver.solve_hp(problem.b, problem.enthalpy_J + extra_J, kAtm_Pa, &previous);
+        problem.solver.solve_hp(problem.b, stackbound::units::joules(problem.enthalpy_J + extra_J),
+                                stackbound::units::pascals(kAtm_Pa), &previous);
     iterations += result.iterations;
     keep(result.temperature_K);
     previous = std::move(result);

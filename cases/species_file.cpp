@@ -80,9 +80,9 @@ core::Species species_from(std::string_view origin, const YAML::Node& node, std:
 
   const YAML::Node range = node["range_K"];
   if (!range || !range.IsMap()) fail(origin, range ? range : node, field + ".range_K", "expected {low, mid, high}");
-  record.range = {number_at(origin, range["low"], field + ".range_K.low"),
-                  number_at(origin, range["mid"], field + ".range_K.mid"),
-                  number_at(origin, range["high"], field + ".range_K.high")};
+  record.range = {units::kelvin(number_at(origin, range["low"], field + ".range_K.low")),
+                  units::kelvin(number_at(origin, range["mid"], field + ".range_K.mid")),
+                  units::kelvin(number_at(origin, range["high"], field + ".range_K.high"))};
   record.below_mid = coefficients_at(origin, node["below_mid"], field + ".below_mid");
   record.above_mid = coefficients_at(origin, node["above_mid"], field + ".above_mid");
   const YAML::Node source = node["source"];

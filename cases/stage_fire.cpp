@@ -35,9 +35,9 @@ FiringState fire_stage(const FiringSpec& firing, const ResolvedCase& resolved, c
   core::EquilibriumResult equilibrium = at_field(firing_field(firing), [&] {
     if (firing.adiabatic) {
       const double target = combustion.reactant_enthalpy_J_per_kg - firing.heat_loss_fraction * combustion.hhv_J_per_kg;
-      return solver->solve_hp(elements, target, firing.pressure_Pa, warm);
+      return solver->solve_hp(elements, units::joules(target), units::pascals(firing.pressure_Pa), warm);
     }
-    return solver->solve_tp(elements, firing.temperature_K, firing.pressure_Pa, warm);
+    return solver->solve_tp(elements, units::kelvin(firing.temperature_K), units::pascals(firing.pressure_Pa), warm);
   });
   const double temperature_K = equilibrium.temperature_K;
   const double pressure_Pa = equilibrium.pressure_Pa;

@@ -186,13 +186,15 @@ void run(const EquilibriumOptions& options, const GlobalOptions& global) {
         throw units::InputError(
             fmt::format("--heat-loss = \"{}\": must be at least 0 % and below 100 %", options.heat_loss));
       }
-      const double enthalpy_J = core::feed_enthalpy_J(database, feed, feed_temperature_K, "--feed-temperature");
-      const double heating_value_J =
-          loss > 0.0 ? core::feed_heating_value_J(database, feed, core::HeatingValueKind::higher, "--feed") : 0.0;
-      result = solver.solve_hp(b, core::hp_target_enthalpy_J(enthalpy_J, loss, heating_value_J), pressure_Pa);
+      const units::Energy enthalpy =
+          core::feed_enthalpy(database, feed, units::kelvin(feed_temperature_K), "--feed-temperature");
+      const units::Energy heating_value =
+          loss > 0.0 ? core::feed_heating_value(database, feed, core::HeatingValueKind::higher, "--feed")
+                     : units::joules(0.0);
+      result = solver.solve_hp(b, core::hp_target_enthalpy(enthalpy, loss, heating_value), units::pascals(pressure_Pa));
     } else {
       const double temperature_K = units::parse_temperature(options.temperature, "--temperature").value();
-      result = solver.solve_tp(b, temperature_K, pressure_Pa);
+      result = solver.solve_tp(b, units::kelvin(temperature_K), units::pascals(pressure_Pa));
     }
   } catch (const units::InputError& error) {
     rethrow_as_option(error);

@@ -29,7 +29,7 @@ std::string species_table(const core::SpeciesDatabase& database) {
                                  "T_high [K]", "phase", "source");
   for (const core::Species& s : database.all()) {
     text += fmt::format("{:<10} {:>12.5f} {:>9.2f} {:>9.2f}  {:<9} {}\n", s.formula(), s.molar_mass_kg_per_mol() * 1e3,
-                        s.range().low_K, s.range().high_K, s.is_gas() ? "gas" : "condensed", s.source());
+                        s.range().low.value(), s.range().high.value(), s.is_gas() ? "gas" : "condensed", s.source());
   }
   text += fmt::format("{} species. Standard-state pressure 1 bar; NASA 7-coefficient polynomials.\n", database.size());
   return text;
@@ -43,7 +43,7 @@ nlohmann::json species_list_json(const core::SpeciesDatabase& database) {
     list.push_back({{"name", s.formula()},
                     {"molar_mass_g_per_mol", s.molar_mass_kg_per_mol() * 1e3},
                     {"phase", s.is_gas() ? "gas" : "condensed"},
-                    {"temperature_range_K", {s.range().low_K, s.range().mid_K, s.range().high_K}},
+                    {"temperature_range_K", {s.range().low.value(), s.range().mid.value(), s.range().high.value()}},
                     {"composition", composition},
                     {"source", s.source()}});
   }
@@ -61,15 +61,16 @@ void run(const SpeciesOptions& options, const GlobalOptions& global) {
     return;
   }
   const core::Species& species = database.at(options.name, "NAME");
-  const double T = options.temperature.empty()
-                       ? units::kReferenceTemperature_K
-                       : units::parse_temperature(options.temperature, "--temperature").value();
-  species.check_temperature(T);
+  const units::Temperature temperature = options.temperature.empty()
+                                             ? units::kelvin(units::kReferenceTemperature_K)
+                                             : units::parse_temperature(options.temperature, "--temperature");
+  species.check_temperature(temperature);
+  const double T = temperature.value();
   const double R = units::kGasConstant_J_per_mol_K;
-  const double cp = R * species.cp_over_R(T);
-  const double h = R * T * species.h_over_RT(T);
-  const double s = R * species.s_over_R(T);
-  const double g = R * T * species.g_over_RT(T);
+  const double cp = R * species.cp_over_R(temperature);
+  const double h = R * T * species.h_over_RT(temperature);
+  const double s = R * species.s_over_R(temperature);
+  const double g = R * T * species.g_over_RT(temperature);
   if (options.format == "json") {
     const nlohmann::json out = {{"name", species.formula()},       {"temperature_K", T},
                                 {"cp_J_per_mol_K", cp},            {"h_J_per_mol", h},

@@ -17,7 +17,7 @@ constexpr double kColdStartTemperature_K = 2000.0;
 
 double enthalpy_298_J_per_mol(const Species& species) {
   const double T = units::kReferenceTemperature_K;
-  return kR * T * species.h_over_RT(T);
+  return kR * T * species.h_over_RT(units::kelvin(T));
 }
 
 const Species& required(const SpeciesDatabase& db, std::string_view formula, std::string_view field) {
@@ -33,8 +33,10 @@ const Species& required(const SpeciesDatabase& db, std::string_view formula, std
 // ---------------------------------------------------------------------------------------------------
 // HP equilibrium: safeguarded Newton on T.
 
-EquilibriumResult EquilibriumSolver::solve_hp(const ElementAmounts& b, double target_enthalpy_J, double pressure_Pa,
-                                              const EquilibriumResult* warm_start) const {
+EquilibriumResult EquilibriumSolver::solve_hp(const ElementAmounts& b, units::Energy target_enthalpy,
+                                              units::Pressure pressure, const EquilibriumResult* warm_start) const {
+  const double target_enthalpy_J = target_enthalpy.value();
+  const double pressure_Pa = pressure.value();
   if (!std::isfinite(target_enthalpy_J)) {
     throw units::InputError(fmt::format("target enthalpy = {:g} J: must be a finite number", target_enthalpy_J));
   }
@@ -44,7 +46,7 @@ EquilibriumResult EquilibriumSolver::solve_hp(const ElementAmounts& b, double ta
   // 300 K admit 298.15 K but not the gap between).
   const auto covered = [this](double T) {
     for (const Candidate& c : candidates_) {
-      if (!c.species->covers(T)) T = std::max(T, c.species->range().low_K);
+      if (!c.species->covers(units::kelvin(T))) T = std::max(T, c.species->range().low.value());
     }
     return T;
   };
@@ -60,7 +62,7 @@ EquilibriumResult EquilibriumSolver::solve_hp(const ElementAmounts& b, double ta
   EquilibriumResult previous;
   const EquilibriumResult* seed = warm_start;
   for (int step = 1; step <= options_.max_temperature_iterations; ++step) {
-    EquilibriumResult current = solve_tp(b, T, pressure_Pa, seed);
+    EquilibriumResult current = solve_tp(b, units::kelvin(T), pressure, seed);
     iterations += current.iterations;
     const double excess_J = current.enthalpy_J - target_enthalpy_J;
     if (excess_J > 0.0) {
@@ -110,8 +112,8 @@ EquilibriumResult EquilibriumSolver::solve_hp(const ElementAmounts& b, double ta
 // ---------------------------------------------------------------------------------------------------
 // Heating values and the HP target.
 
-double feed_heating_value_J(const SpeciesDatabase& db, std::span<const SpeciesAmount> feed, HeatingValueKind basis,
-                            std::string_view field) {
+units::Energy feed_heating_value(const SpeciesDatabase& db, std::span<const SpeciesAmount> feed, HeatingValueKind basis,
+                                 std::string_view field) {
   (void)element_amounts(db, feed, field);  // validates names and amounts
   double total_J = 0.0;
   for (const SpeciesAmount& entry : feed) {
@@ -134,10 +136,12 @@ double feed_heating_value_J(const SpeciesDatabase& db, std::span<const SpeciesAm
     if (basis == HeatingValueKind::higher) released_J += h / 2 * kWaterVaporisationEnthalpy298_J_per_mol;
     total_J += entry.moles * released_J;
   }
-  return total_J;
+  return units::joules(total_J);
 }
 
-double hp_target_enthalpy_J(double feed_enthalpy_J, double heat_loss_fraction, double heating_value_J) {
+units::Energy hp_target_enthalpy(units::Energy feed_enthalpy, double heat_loss_fraction, units::Energy heating_value) {
+  const double feed_enthalpy_J = feed_enthalpy.value();
+  const double heating_value_J = heating_value.value();
   if (!std::isfinite(heat_loss_fraction) || heat_loss_fraction < 0.0 || heat_loss_fraction >= 1.0) {
     throw units::InputError(fmt::format(
         "heat loss = {:g}: must be a fraction of the heating value in [0, 1) (e.g. 0.05 for 5 %)", heat_loss_fraction));
@@ -148,7 +152,7 @@ double hp_target_enthalpy_J(double feed_enthalpy_J, double heat_loss_fraction, d
   if (!std::isfinite(feed_enthalpy_J)) {
     throw units::InputError(fmt::format("feed enthalpy = {:g} J: must be a finite number", feed_enthalpy_J));
   }
-  return feed_enthalpy_J - heat_loss_fraction * heating_value_J;
+  return units::joules(feed_enthalpy_J - heat_loss_fraction * heating_value_J);
 }
 
 EquilibriumResult adiabatic_flame(const SpeciesDatabase& db, std::span<const FeedStream> streams,
@@ -161,14 +165,15 @@ EquilibriumResult adiabatic_flame(const SpeciesDatabase& db, std::span<const Fee
   double heating_value_J = 0.0;
   for (const FeedStream& stream : streams) {
     b.add(element_amounts(db, stream.species));
-    enthalpy_J += feed_enthalpy_J(db, stream.species, stream.temperature_K);
+    enthalpy_J += feed_enthalpy(db, stream.species, stream.temperature).value();
     if (options.heat_loss_fraction != 0.0) {
-      heating_value_J += feed_heating_value_J(db, stream.species, options.heating_value_kind);
+      heating_value_J += feed_heating_value(db, stream.species, options.heating_value_kind).value();
     }
   }
-  const double target_J = hp_target_enthalpy_J(enthalpy_J, options.heat_loss_fraction, heating_value_J);
+  const units::Energy target =
+      hp_target_enthalpy(units::joules(enthalpy_J), options.heat_loss_fraction, units::joules(heating_value_J));
   const EquilibriumSolver solver(db, b, options.candidates);
-  return solver.solve_hp(b, target_J, options.pressure_Pa);
+  return solver.solve_hp(b, target, options.pressure);
 }
 
 }  // namespace stackbound::core

@@ -23,24 +23,25 @@
 namespace stackbound::core {
 
 // Heat released by complete combustion of the feed's combustible species at 298.15 K (products CO2,
-// H2O, SO2, N2; O2 taken as needed whether or not the feed holds it), J. Species that release no
+// H2O, SO2, N2; O2 taken as needed whether or not the feed holds it). Species that release no
 // heat (O2, N2, CO2, H2O, Ar, ...) contribute nothing. Throws units::InputError like
 // element_amounts(), or if the database lacks CO2, H2O, SO2, N2 or O2 where needed.
-[[nodiscard]] double feed_heating_value_J(const SpeciesDatabase& db, std::span<const SpeciesAmount> feed,
-                                          HeatingValueKind basis, std::string_view field = "feed");
+[[nodiscard]] units::Energy feed_heating_value(const SpeciesDatabase& db, std::span<const SpeciesAmount> feed,
+                                               HeatingValueKind basis, std::string_view field = "feed");
 
 // H_target = feed_enthalpy - heat_loss_fraction * heating_value. Throws units::InputError if the
 // fraction is outside [0, 1) or the heating value is negative or not finite.
-[[nodiscard]] double hp_target_enthalpy_J(double feed_enthalpy_J, double heat_loss_fraction, double heating_value_J);
+[[nodiscard]] units::Energy hp_target_enthalpy(units::Energy feed_enthalpy, double heat_loss_fraction,
+                                               units::Energy heating_value);
 
 // One reactant stream at its own temperature.
 struct FeedStream {
   std::vector<SpeciesAmount> species;
-  double temperature_K = units::kReferenceTemperature_K;
+  units::Temperature temperature = units::kelvin(units::kReferenceTemperature_K);
 };
 
 struct AdiabaticFlameOptions {
-  double pressure_Pa = units::kStandardAtmosphere_Pa;
+  units::Pressure pressure = units::pascals(units::kStandardAtmosphere_Pa);
   // Fraction of the feed's heating value lost from the flame (0 = adiabatic), dimensionless.
   double heat_loss_fraction = 0.0;
   HeatingValueKind heating_value_kind = HeatingValueKind::higher;

@@ -56,7 +56,7 @@ double oxygen_beyond_co(const ElementMoles& e) { return e[kO] - 2.0 * e[kS] - e[
 // Equilibrium constant of CO + H2O = CO2 + H2 (dimensionless, no mole change) from the species data.
 double shift_constant(double temperature_K, const SpeciesDatabase& database) {
   const auto g = [&](std::string_view formula) {
-    return database.at(formula, "species data for the water-gas shift").g_over_RT(temperature_K);
+    return database.at(formula, "species data for the water-gas shift").g_over_RT(units::kelvin(temperature_K));
   };
   return std::exp(-(g("CO2") + g("H2") - g("CO") - g("H2O")));
 }
@@ -300,7 +300,7 @@ CombustionResult burn(const Fuel& fuel, const Oxidant& oxidant, const OperatingP
   const ElementMoles per_mol_oxidant = oxidant_elements_per_mol(oxidant);
   r.oxidant_element_mol_per_kg = add(ElementMoles{}, per_mol_oxidant, r.oxidant_mol_per_kg);
   r.reactant_element_mol_per_kg = add(r.fuel_element_mol_per_kg, per_mol_oxidant, r.oxidant_mol_per_kg);
-  r.fuel_enthalpy_J_per_kg = fuel.enthalpy_J_per_kg(T_fuel, database);
+  r.fuel_enthalpy_J_per_kg = fuel.enthalpy(units::kelvin(T_fuel), database).value();
   r.oxidant_enthalpy_J_per_kg = r.oxidant_mol_per_kg * oxidant.enthalpy_J_per_mol(database);
   r.reactant_enthalpy_J_per_kg = r.fuel_enthalpy_J_per_kg + r.oxidant_enthalpy_J_per_kg;
   if (!fuel.sensible_heat_known() && std::abs(T_fuel - units::kReferenceTemperature_K) > 0.5) {
@@ -337,7 +337,9 @@ CombustionResult burn(const Fuel& fuel, const Oxidant& oxidant, const OperatingP
   r.flue_o2_wet = r.flue.mole_fraction(FlueSpecies::O2, GasBasis::wet);
   r.flue_co2_dry = r.flue.mole_fraction(FlueSpecies::CO2, GasBasis::dry);
   r.moisture_fraction = r.flue.mole_fraction(FlueSpecies::H2O, GasBasis::wet);
-  r.water_dew_point_K = water_dew_point_K(r.moisture_fraction * p_flue, "flue water partial pressure");
+  const std::optional<units::Temperature> dew_point =
+      water_dew_point(units::pascals(r.moisture_fraction * p_flue), "flue water partial pressure");
+  if (dew_point) r.water_dew_point_K = dew_point->value();
   r.f_factors = f_factors(fuel);
   return r;
 }

@@ -150,6 +150,16 @@ struct CombustionResult {
 
   FFactors f_factors;
   std::vector<std::string> warnings;  // the fuel's, plus those of this calculation
+
+  // The temperatures and the pressure as quantities (the raw fields feed the renderers unchanged).
+  [[nodiscard]] units::Temperature fuel_temperature() const { return units::kelvin(fuel_temperature_K); }
+  [[nodiscard]] units::Temperature oxidant_temperature() const { return units::kelvin(oxidant_temperature_K); }
+  [[nodiscard]] units::Pressure flue_pressure() const { return units::pascals(flue_pressure_Pa); }
+  [[nodiscard]] units::Temperature shift_temperature() const { return units::kelvin(shift_temperature_K); }
+  [[nodiscard]] std::optional<units::Temperature> water_dew_point() const {
+    if (!water_dew_point_K) return std::nullopt;
+    return units::kelvin(*water_dew_point_K);
+  }
 };
 
 // The air ratio lambda for this fuel, oxidant and operating point. Throws units::InputError naming
@@ -179,6 +189,10 @@ struct FuelFeed {
   std::string given;                           // as the user gave it: "1.2 t/h (mass flow)"
 
   [[nodiscard]] units::MassFlow mass_flow() const { return units::kilograms_per_second(mass_flow_kg_per_s); }
+  [[nodiscard]] std::optional<units::MolarFlow> molar_flow() const {
+    if (!molar_flow_mol_per_s) return std::nullopt;
+    return units::moles_per_second(*molar_flow_mol_per_s);
+  }
   [[nodiscard]] units::Power heat_input(HeatInputBasis basis) const {
     return units::watts(basis == HeatInputBasis::hhv ? heat_input_hhv_W : heat_input_lhv_W);
   }
@@ -205,6 +219,18 @@ struct CombustionRates {
   double ash_kg_per_s = 0.0;
   ElementMoles reactant_element_mol_per_s{};
   double reactant_enthalpy_W = 0.0;  // reactant enthalpy flow on the species data's scale
+
+  // The flows as quantities (the raw fields stay for the renderers and the stages).
+  [[nodiscard]] units::MolarFlow oxidant_flow() const { return units::moles_per_second(oxidant_mol_per_s); }
+  [[nodiscard]] units::MassFlow oxidant_mass_flow() const { return units::kilograms_per_second(oxidant_kg_per_s); }
+  [[nodiscard]] units::MolarFlow flue_flow(FlueSpecies species) const {
+    return units::moles_per_second(flue_mol_per_s[static_cast<std::size_t>(species)]);
+  }
+  [[nodiscard]] units::MolarFlow flue_wet_flow() const { return units::moles_per_second(flue_wet_mol_per_s); }
+  [[nodiscard]] units::MolarFlow flue_dry_flow() const { return units::moles_per_second(flue_dry_mol_per_s); }
+  [[nodiscard]] units::MassFlow flue_mass_flow() const { return units::kilograms_per_second(flue_kg_per_s); }
+  [[nodiscard]] units::MassFlow ash_mass_flow() const { return units::kilograms_per_second(ash_kg_per_s); }
+  [[nodiscard]] units::Power reactant_enthalpy_flow() const { return units::watts(reactant_enthalpy_W); }
 };
 
 CombustionRates rates(const CombustionResult& result, const FuelFeed& feed);

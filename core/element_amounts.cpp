@@ -76,8 +76,9 @@ ElementAmounts element_amounts(const SpeciesDatabase& db, std::span<const Specie
   return amounts;
 }
 
-double feed_enthalpy_J(const SpeciesDatabase& db, std::span<const SpeciesAmount> feed, double temperature_K,
-                       std::string_view field) {
+units::Energy feed_enthalpy(const SpeciesDatabase& db, std::span<const SpeciesAmount> feed,
+                            units::Temperature temperature, std::string_view field) {
+  const double temperature_K = temperature.value();
   const std::vector<const Species*> species = checked_feed(db, feed, field);
   if (!std::isfinite(temperature_K) || temperature_K <= 0.0) {
     throw units::InputError(
@@ -86,15 +87,15 @@ double feed_enthalpy_J(const SpeciesDatabase& db, std::span<const SpeciesAmount>
   double enthalpy_J = 0.0;
   for (std::size_t i = 0; i < feed.size(); ++i) {
     if (feed[i].moles == 0.0) continue;
-    if (!species[i]->covers(temperature_K)) {
+    if (!species[i]->covers(temperature)) {
       throw units::InputError(fmt::format("{} temperature = {:g} K: outside the data range {:g}-{:g} K of {}", field,
-                                          temperature_K, species[i]->range().low_K, species[i]->range().high_K,
-                                          species[i]->formula()));
+                                          temperature_K, species[i]->range().low.value(),
+                                          species[i]->range().high.value(), species[i]->formula()));
     }
     enthalpy_J += feed[i].moles * units::kGasConstant_J_per_mol_K * temperature_K *
                   species[i]->h_over_RT_unchecked(temperature_K);
   }
-  return enthalpy_J;
+  return units::joules(enthalpy_J);
 }
 
 }  // namespace stackbound::core

@@ -44,9 +44,9 @@ struct SpeciesAmount {
 [[nodiscard]] ElementAmounts element_amounts(const SpeciesDatabase& db, std::span<const SpeciesAmount> feed,
                                              std::string_view field = "feed");
 
-// Total enthalpy of the feed at `temperature_K`, J (includes enthalpies of formation). Throws
+// Total enthalpy of the feed at `temperature` (includes enthalpies of formation). Throws
 // units::InputError like element_amounts(), and when the temperature is outside a species' data range.
-[[nodiscard]] double feed_enthalpy_J(const SpeciesDatabase& db, std::span<const SpeciesAmount> feed,
-                                     double temperature_K, std::string_view field = "feed");
+[[nodiscard]] units::Energy feed_enthalpy(const SpeciesDatabase& db, std::span<const SpeciesAmount> feed,
+                                          units::Temperature temperature, std::string_view field = "feed");
 
 }  // namespace stackbound::core

@@ -205,7 +205,7 @@ EquilibriumWork::Candidate EquilibriumWork::candidate_of(const Species& species)
   }
   candidate.below_mid = species.record().below_mid;
   candidate.above_mid = species.record().above_mid;
-  candidate.mid_K = species.range().mid_K;
+  candidate.mid_K = species.range().mid.value();
   return candidate;
 }
 
@@ -258,9 +258,9 @@ void EquilibriumWork::set_temperature_range(EquilibriumSolver& solver) {
   solver.max_temperature_K_ = std::numeric_limits<double>::infinity();
   bool all_cover_reference = true;
   for (const Candidate& c : solver.candidates_) {
-    solver.min_temperature_K_ = std::max(solver.min_temperature_K_, c.species->range().low_K);
-    solver.max_temperature_K_ = std::min(solver.max_temperature_K_, c.species->range().high_K);
-    all_cover_reference = all_cover_reference && c.species->covers(units::kReferenceTemperature_K);
+    solver.min_temperature_K_ = std::max(solver.min_temperature_K_, c.species->range().low.value());
+    solver.max_temperature_K_ = std::min(solver.max_temperature_K_, c.species->range().high.value());
+    all_cover_reference = all_cover_reference && c.species->covers(units::kelvin(units::kReferenceTemperature_K));
   }
   solver.covered_low_K_ = solver.min_temperature_K_;
   if (all_cover_reference) {
@@ -347,12 +347,12 @@ void EquilibriumSolver::check_temperature(double temperature_K) const {
   }
   if (temperature_K >= covered_low_K_ && temperature_K <= max_temperature_K_) return;  // every record covers it
   for (const Candidate& c : candidates_) {
-    if (!c.species->covers(temperature_K)) {
+    if (!c.species->covers(units::kelvin(temperature_K))) {
       throw units::InputError(fmt::format(
           "temperature = {:g} K: outside the data range of product {} ({:g}-{:g} K); the product candidates "
           "together cover {:g}-{:g} K",
-          temperature_K, c.species->formula(), c.species->range().low_K, c.species->range().high_K, min_temperature_K_,
-          max_temperature_K_));
+          temperature_K, c.species->formula(), c.species->range().low.value(), c.species->range().high.value(),
+          min_temperature_K_, max_temperature_K_));
     }
   }
 }
@@ -360,8 +360,10 @@ void EquilibriumSolver::check_temperature(double temperature_K) const {
 // ---------------------------------------------------------------------------------------------------
 // The TP solve
 
-EquilibriumResult EquilibriumSolver::solve_tp(const ElementAmounts& b, double temperature_K, double pressure_Pa,
-                                              const EquilibriumResult* warm_start) const {
+EquilibriumResult EquilibriumSolver::solve_tp(const ElementAmounts& b, units::Temperature temperature,
+                                              units::Pressure pressure, const EquilibriumResult* warm_start) const {
+  const double temperature_K = temperature.value();
+  const double pressure_Pa = pressure.value();
   try {
     return EquilibriumWork::solve(*this, b, temperature_K, pressure_Pa, warm_start);
   } catch (const ConvergenceError&) {

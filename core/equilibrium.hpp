@@ -26,6 +26,7 @@
 
 #include "stackbound/core/element_amounts.hpp"
 #include "stackbound/core/species_database.hpp"
+#include "stackbound/units/quantities.hpp"
 
 namespace stackbound::core {
 
@@ -54,6 +55,13 @@ struct EquilibriumResult {
   int temperature_iterations = 0;  // HP only: Newton steps on T
   std::uint64_t species_key = 0;   // identifies the solver's product list (for warm starts)
 
+  // The state as quantities. The raw fields above stay: the solver's inner loops, warm starts and the
+  // renderers read them, and keeping them keeps every stored number bit-identical.
+  [[nodiscard]] units::Temperature temperature() const { return units::kelvin(temperature_K); }
+  [[nodiscard]] units::Pressure pressure() const { return units::pascals(pressure_Pa); }
+  [[nodiscard]] units::Energy enthalpy() const { return units::joules(enthalpy_J); }
+  [[nodiscard]] units::Amount total_gas_amount() const { return units::moles(total_gas_moles); }
+
   // 0 if `formula` is not a product.
   [[nodiscard]] double mole_fraction(std::string_view formula) const;
   [[nodiscard]] double moles_of(std::string_view formula) const;
@@ -70,6 +78,8 @@ class ConvergenceError : public std::runtime_error {
   [[nodiscard]] double element_residual() const { return element_residual_; }
   [[nodiscard]] double temperature_K() const { return temperature_K_; }
   [[nodiscard]] double pressure_Pa() const { return pressure_Pa_; }
+  [[nodiscard]] units::Temperature temperature() const { return units::kelvin(temperature_K_); }
+  [[nodiscard]] units::Pressure pressure() const { return units::pascals(pressure_Pa_); }
 
  private:
   int iterations_;
@@ -108,20 +118,22 @@ class EquilibriumSolver {
   // (any b) at the same pressure and within 5 % in T seeds the iteration (its element potentials,
   // moved along their temperature slopes); any other warm start is ignored and the solve starts
   // cold (linear-programming estimate). The answer does not depend on the start.
-  [[nodiscard]] EquilibriumResult solve_tp(const ElementAmounts& b, double temperature_K, double pressure_Pa,
+  [[nodiscard]] EquilibriumResult solve_tp(const ElementAmounts& b, units::Temperature temperature,
+                                           units::Pressure pressure,
                                            const EquilibriumResult* warm_start = nullptr) const;
 
-  // HP: products whose enthalpy equals `target_enthalpy_J` (the caller subtracts any heat loss), by a
+  // HP: products whose enthalpy equals `target_enthalpy` (the caller subtracts any heat loss), by a
   // safeguarded Newton on T using the equilibrium heat capacity, each TP solve warm-started.
   // Throws units::InputError if the temperature would leave the candidates' common data range.
-  [[nodiscard]] EquilibriumResult solve_hp(const ElementAmounts& b, double target_enthalpy_J, double pressure_Pa,
+  [[nodiscard]] EquilibriumResult solve_hp(const ElementAmounts& b, units::Energy target_enthalpy,
+                                           units::Pressure pressure,
                                            const EquilibriumResult* warm_start = nullptr) const;
 
   // Product formulas in solver order (as in EquilibriumResult::species).
   [[nodiscard]] const std::vector<std::string>& species() const { return names_; }
-  // Common data range of all candidates, K (a TP temperature must lie inside).
-  [[nodiscard]] double min_temperature_K() const { return min_temperature_K_; }
-  [[nodiscard]] double max_temperature_K() const { return max_temperature_K_; }
+  // Common data range of all candidates (a TP temperature must lie inside).
+  [[nodiscard]] units::Temperature min_temperature() const { return units::kelvin(min_temperature_K_); }
+  [[nodiscard]] units::Temperature max_temperature() const { return units::kelvin(max_temperature_K_); }
   [[nodiscard]] const EquilibriumOptions& options() const { return options_; }
 
  private:

@@ -32,7 +32,7 @@ double water_molar_mass_kg_per_mol() { return 2.0 * atomic_weight_kg_per_mol(kH)
 
 // h(298.15 K) of a species in the database, J/mol; InputError if the data lack it.
 double h298_J_per_mol(const SpeciesDatabase& database, std::string_view formula) {
-  return kR * kT0_K * database.at(formula, "species data needed for heating values").h_over_RT(kT0_K);
+  return kR * kT0_K * database.at(formula, "species data needed for heating values").h_over_RT(units::kelvin(kT0_K));
 }
 
 double liquid_water_h298_J_per_mol(const SpeciesDatabase& database) {
@@ -562,14 +562,15 @@ std::optional<double> Fuel::molar_mass_kg_per_mol() const {
   return 1.0 / total;
 }
 
-double Fuel::enthalpy_J_per_kg(double temperature_K, const SpeciesDatabase& database) const {
+units::SpecificEnergy Fuel::enthalpy(units::Temperature temperature, const SpeciesDatabase& database) const {
+  const double temperature_K = temperature.value();
   double h = 0.0;
   for (const auto& [formula, n] : gas_mol_per_kg_) {
-    h += n * kR * temperature_K * database.at(formula, "fuel species").h_over_RT(temperature_K);
+    h += n * kR * temperature_K * database.at(formula, "fuel species").h_over_RT(temperature);
   }
   h += condensed_formation_J_per_kg_;
   if (specific_heat_known_) h += condensed_heat_capacity_J_per_kg_K_ * (temperature_K - kT0_K);
-  return h;
+  return units::joules_per_kilogram(h);
 }
 
 }  // namespace stackbound::core

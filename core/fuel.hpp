@@ -182,11 +182,16 @@ class Fuel {
   [[nodiscard]] std::vector<std::pair<std::string, double>> mole_fractions() const;
   // Molar mass of a gas fuel, kg/mol; nothing for fuels with a liquid or solid part.
   [[nodiscard]] std::optional<double> molar_mass_kg_per_mol() const;
+  [[nodiscard]] std::optional<units::MolarMass> molar_mass() const {
+    const std::optional<double> value = molar_mass_kg_per_mol();
+    if (!value) return std::nullopt;
+    return units::kilograms_per_mole(*value);
+  }
 
-  // Specific enthalpy, J/kg, at `temperature_K` on the species data's scale. Gas species are
+  // Specific enthalpy (per kg of fuel) at `temperature` on the species data's scale. Gas species are
   // evaluated from `database` (an InputError if T is outside a species' range); the liquid/solid part
   // is h_f + c_p (T - 298.15 K) when a specific heat was given, h_f otherwise.
-  [[nodiscard]] double enthalpy_J_per_kg(double temperature_K, const SpeciesDatabase& database) const;
+  [[nodiscard]] units::SpecificEnergy enthalpy(units::Temperature temperature, const SpeciesDatabase& database) const;
   // Enthalpy of formation of the liquid/solid part, J per kg of fuel (0 for gas fuels).
   [[nodiscard]] double condensed_formation_enthalpy_J_per_kg() const { return condensed_formation_J_per_kg_; }
   // True when the fuel's sensible heat above 298.15 K is fully known (gas, or c_p given).

@@ -31,8 +31,7 @@ constexpr double kSublimationLowest_K = 50.0;
   throw units::InputError(fmt::format("{} = {:.6g} {}: {}", field, value, unit, rule));
 }
 
-}  // namespace
-
+// The equations on raw SI numbers; the typed functions below are their public face.
 double water_saturation_pressure_Pa(double temperature_K, std::string_view field) {
   if (!std::isfinite(temperature_K) || temperature_K < kIf97LowestTemperature_K ||
       temperature_K > kWaterCriticalTemperature_K) {
@@ -62,7 +61,7 @@ double water_saturation_temperature_K(double pressure_Pa, std::string_view field
   return 0.5 * (sum - std::sqrt(sum * sum - 4.0 * (kN[8] + kN[9] * D)));
 }
 
-double ice_sublimation_pressure_Pa(double temperature_K, std::string_view field) {
+double ice_sublimation_pressure_Pa(double temperature_K, std::string_view field = "temperature") {
   if (!std::isfinite(temperature_K) || temperature_K < kSublimationLowest_K || temperature_K > kWaterTriplePoint_K) {
     out_of_range(field, temperature_K, "K",
                  "outside the range of the IAPWS sublimation equation over ice (50 K to 273.16 K)");
@@ -97,6 +96,30 @@ std::optional<double> water_dew_point_K(double water_partial_pressure_Pa, std::s
   const auto [low, high] = boost::math::tools::toms748_solve(residual, kSublimationLowest_K, kWaterTriplePoint_K,
                                                              boost::math::tools::eps_tolerance<double>(48), iterations);
   return 0.5 * (low + high);
+}
+
+}  // namespace
+
+units::Pressure water_saturation_pressure(units::Temperature temperature, std::string_view field) {
+  return units::pascals(water_saturation_pressure_Pa(temperature.value(), field));
+}
+
+units::Temperature water_saturation_temperature(units::Pressure pressure, std::string_view field) {
+  return units::kelvin(water_saturation_temperature_K(pressure.value(), field));
+}
+
+units::Pressure ice_sublimation_pressure(units::Temperature temperature, std::string_view field) {
+  return units::pascals(ice_sublimation_pressure_Pa(temperature.value(), field));
+}
+
+units::Pressure water_vapour_pressure(units::Temperature temperature, std::string_view field) {
+  return units::pascals(water_vapour_pressure_Pa(temperature.value(), field));
+}
+
+std::optional<units::Temperature> water_dew_point(units::Pressure water_partial_pressure, std::string_view field) {
+  const std::optional<double> dew_point_K = water_dew_point_K(water_partial_pressure.value(), field);
+  if (!dew_point_K) return std::nullopt;
+  return units::kelvin(*dew_point_K);
 }
 
 }  // namespace stackbound::core

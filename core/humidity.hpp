@@ -14,6 +14,8 @@
 #include <optional>
 #include <string_view>
 
+#include "stackbound/units/quantities.hpp"
+
 namespace stackbound::core {
 
 // Triple point of water. Source: IAPWS-IF97 (T_t = 273.16 K) and IAPWS R14-08(2011) (p_t = 611.657 Pa).
@@ -25,23 +27,23 @@ inline constexpr double kWaterCriticalPressure_Pa = 22.064e6;
 
 // Saturation pressure over liquid water, IAPWS-IF97 Eq. 30; valid 273.15 K <= T <= 647.096 K.
 // `field` names the input in error messages.
-double water_saturation_pressure_Pa(double temperature_K, std::string_view field = "temperature");
+units::Pressure water_saturation_pressure(units::Temperature temperature, std::string_view field = "temperature");
 
 // Saturation temperature over liquid water, IAPWS-IF97 Eq. 31; valid 611.213 Pa <= p <= 22.064 MPa.
-double water_saturation_temperature_K(double pressure_Pa, std::string_view field = "pressure");
+units::Temperature water_saturation_temperature(units::Pressure pressure, std::string_view field = "pressure");
 
 // Sublimation pressure over ice Ih, IAPWS R14-08(2011) Eq. 6; valid 50 K <= T <= 273.16 K.
-double ice_sublimation_pressure_Pa(double temperature_K, std::string_view field = "temperature");
+units::Pressure ice_sublimation_pressure(units::Temperature temperature, std::string_view field = "temperature");
 
 // Equilibrium vapour pressure of water: over liquid water at or above the triple point (273.16 K),
 // over ice below it. Valid 50 K <= T <= 647.096 K.
-double water_vapour_pressure_Pa(double temperature_K, std::string_view field = "temperature");
+units::Pressure water_vapour_pressure(units::Temperature temperature, std::string_view field = "temperature");
 
-// Water dew point of a gas whose water partial pressure is `water_partial_pressure_Pa`: the
-// temperature at which water_vapour_pressure_Pa(T) equals it (a frost point over ice below 273.16 K).
+// Water dew point of a gas whose water partial pressure is `water_partial_pressure`: the
+// temperature at which water_vapour_pressure(T) equals it (a frost point over ice below 273.16 K).
 // Returns nothing when the gas holds no water (p <= 0) or the frost point would lie below 50 K.
 // Throws units::InputError when the partial pressure is at or above the critical pressure.
-std::optional<double> water_dew_point_K(double water_partial_pressure_Pa,
-                                        std::string_view field = "water partial pressure");
+std::optional<units::Temperature> water_dew_point(units::Pressure water_partial_pressure,
+                                                  std::string_view field = "water partial pressure");
 
 }  // namespace stackbound::core

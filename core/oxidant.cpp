@@ -68,7 +68,7 @@ Humidity Humidity::relative(double relative_humidity, units::Temperature ambient
   if (!std::isfinite(p) || p <= 0.0) {
     throw units::InputError(fmt::format("{}: ambient pressure {:.6g} Pa must be above 0", field, p));
   }
-  const double saturation = water_vapour_pressure_Pa(T, field + " (ambient temperature)");
+  const double saturation = water_vapour_pressure(ambient_temperature, field + " (ambient temperature)").value();
   const double partial = relative_humidity * saturation;
   if (partial >= p) {
     throw units::InputError(fmt::format("{} = {:.4g} % at {:.2f} K: the water vapour pressure ({:.6g} Pa) would reach "
@@ -149,7 +149,7 @@ double Oxidant::enthalpy_J_per_mol(const SpeciesDatabase& database) const {
   for (std::size_t i = 0; i < kOxidantSpeciesCount; ++i) {
     if (wet_[i] == 0.0) continue;
     h += wet_[i] * units::kGasConstant_J_per_mol_K * T *
-         database.at(kOxidantSpeciesNames[i], "oxidant species").h_over_RT(T);
+         database.at(kOxidantSpeciesNames[i], "oxidant species").h_over_RT(temperature_);
   }
   return h;
 }

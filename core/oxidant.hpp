@@ -89,6 +89,10 @@ class Oxidant {
   // Molar mass of the oxidant as supplied (with its water), and of its dry part, kg/mol.
   [[nodiscard]] double molar_mass_kg_per_mol() const;
   [[nodiscard]] double dry_molar_mass_kg_per_mol() const;
+  [[nodiscard]] units::MolarMass molar_mass() const { return units::kilograms_per_mole(molar_mass_kg_per_mol()); }
+  [[nodiscard]] units::MolarMass dry_molar_mass() const {
+    return units::kilograms_per_mole(dry_molar_mass_kg_per_mol());
+  }
 
   [[nodiscard]] units::Temperature temperature() const { return temperature_; }
   [[nodiscard]] double temperature_K() const { return temperature_.value(); }
@@ -97,6 +101,9 @@ class Oxidant {
 
   // Molar enthalpy at the oxidant's temperature on the species data's scale, J/mol.
   [[nodiscard]] double enthalpy_J_per_mol(const SpeciesDatabase& database) const;
+  [[nodiscard]] units::MolarEnergy enthalpy(const SpeciesDatabase& database) const {
+    return units::joules_per_mole(enthalpy_J_per_mol(database));
+  }
 
   // One line for reports: "air, dry; supplied at 298.15 K".
   [[nodiscard]] std::string description() const;

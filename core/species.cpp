@@ -33,11 +33,13 @@ Species::Species(SpeciesRecord record) : record_(std::move(record)) {
             fmt::format("the count of {} must be a positive number", count.element));
     molar_mass_kg_per_mol_ += count.count * element.atomic_weight_g_per_mol * 1e-3;
   }
-  const TemperatureRange& r = record_.range;
-  require(std::isfinite(r.low_K) && std::isfinite(r.high_K) && r.low_K > 0.0 && r.low_K <= r.mid_K &&
-              r.mid_K <= r.high_K && r.low_K < r.high_K,
-          name, fmt::format("the temperature range {}-{}-{} K must satisfy 0 < low <= mid <= high", r.low_K,
-                            r.mid_K, r.high_K));
+  const double low_K = record_.range.low.value();
+  const double mid_K = record_.range.mid.value();
+  const double high_K = record_.range.high.value();
+  require(std::isfinite(low_K) && std::isfinite(high_K) && low_K > 0.0 && low_K <= mid_K && mid_K <= high_K &&
+              low_K < high_K,
+          name,
+          fmt::format("the temperature range {}-{}-{} K must satisfy 0 < low <= mid <= high", low_K, mid_K, high_K));
   for (const Nasa7* set : {&record_.below_mid, &record_.above_mid}) {
     for (double a : *set) {
       require(std::isfinite(a), name, "a NASA coefficient is not a finite number");
@@ -54,18 +56,19 @@ double Species::atoms_of(std::string_view element) const {
   return 0.0;
 }
 
-bool Species::covers(double temperature_K) const {
+bool Species::covers(units::Temperature temperature) const {
+  const double temperature_K = temperature.value();
+  const double low_K = record_.range.low.value();
   if (!std::isfinite(temperature_K)) return false;
-  if (temperature_K >= record_.range.low_K && temperature_K <= record_.range.high_K) return true;
-  return record_.range.low_K == kStandardTemperatureAllowance_K &&
-         temperature_K == units::kReferenceTemperature_K;
+  if (temperature_K >= low_K && temperature_K <= record_.range.high.value()) return true;
+  return low_K == kStandardTemperatureAllowance_K && temperature_K == units::kReferenceTemperature_K;
 }
 
-void Species::check_temperature(double temperature_K) const {
-  if (!covers(temperature_K)) {
+void Species::check_temperature(units::Temperature temperature) const {
+  if (!covers(temperature)) {
     throw units::InputError(fmt::format("species {}: temperature {:g} K is outside its data range {:g}-{:g} K",
-                                        record_.formula, temperature_K, record_.range.low_K,
-                                        record_.range.high_K));
+                                        record_.formula, temperature.value(), record_.range.low.value(),
+                                        record_.range.high.value()));
   }
 }
 
@@ -86,36 +89,36 @@ double Species::s_over_R_unchecked(double T) const {
 
 double Species::g_over_RT_unchecked(double T) const { return h_over_RT_unchecked(T) - s_over_R_unchecked(T); }
 
-double Species::cp_over_R(double T) const {
-  check_temperature(T);
-  return cp_over_R_unchecked(T);
+double Species::cp_over_R(units::Temperature temperature) const {
+  check_temperature(temperature);
+  return cp_over_R_unchecked(temperature.value());
 }
-double Species::h_over_RT(double T) const {
-  check_temperature(T);
-  return h_over_RT_unchecked(T);
+double Species::h_over_RT(units::Temperature temperature) const {
+  check_temperature(temperature);
+  return h_over_RT_unchecked(temperature.value());
 }
-double Species::s_over_R(double T) const {
-  check_temperature(T);
-  return s_over_R_unchecked(T);
+double Species::s_over_R(units::Temperature temperature) const {
+  check_temperature(temperature);
+  return s_over_R_unchecked(temperature.value());
 }
-double Species::g_over_RT(double T) const {
-  check_temperature(T);
-  return g_over_RT_unchecked(T);
+double Species::g_over_RT(units::Temperature temperature) const {
+  check_temperature(temperature);
+  return g_over_RT_unchecked(temperature.value());
 }
 
 units::MolarEntropy Species::heat_capacity(units::Temperature temperature) const {
-  return units::joules_per_mole_kelvin(kR * cp_over_R(temperature.value()));
+  return units::joules_per_mole_kelvin(kR * cp_over_R(temperature));
 }
 units::MolarEnergy Species::enthalpy(units::Temperature temperature) const {
   const double T = temperature.value();
-  return units::joules_per_mole(kR * T * h_over_RT(T));
+  return units::joules_per_mole(kR * T * h_over_RT(temperature));
 }
 units::MolarEntropy Species::entropy(units::Temperature temperature) const {
-  return units::joules_per_mole_kelvin(kR * s_over_R(temperature.value()));
+  return units::joules_per_mole_kelvin(kR * s_over_R(temperature));
 }
 units::MolarEnergy Species::gibbs_energy(units::Temperature temperature) const {
   const double T = temperature.value();
-  return units::joules_per_mole(kR * T * g_over_RT(T));
+  return units::joules_per_mole(kR * T * g_over_RT(temperature));
 }
 
 }  // namespace stackbound::core

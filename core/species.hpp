@@ -24,9 +24,9 @@ struct ElementCount {
 };
 
 struct TemperatureRange {
-  double low_K = 0.0;
-  double mid_K = 0.0;  // where the two polynomials meet
-  double high_K = 0.0;
+  units::Temperature low = units::kelvin(0.0);
+  units::Temperature mid = units::kelvin(0.0);  // where the two polynomials meet
+  units::Temperature high = units::kelvin(0.0);
 };
 
 using Nasa7 = std::array<double, 7>;
@@ -62,17 +62,18 @@ class Species {
   [[nodiscard]] double atoms_of(std::string_view element) const;
 
   // True where the polynomials may be evaluated (the range, plus 298.15 K for 300 K records).
-  [[nodiscard]] bool covers(double temperature_K) const;
+  [[nodiscard]] bool covers(units::Temperature temperature) const;
   // Throws units::InputError: 'species NO: temperature 6500 K is outside its data range 200-6000 K'.
-  void check_temperature(double temperature_K) const;
+  void check_temperature(units::Temperature temperature) const;
 
   // Dimensionless standard-state properties; these check the range.
-  [[nodiscard]] double cp_over_R(double temperature_K) const;
-  [[nodiscard]] double h_over_RT(double temperature_K) const;
-  [[nodiscard]] double s_over_R(double temperature_K) const;
-  [[nodiscard]] double g_over_RT(double temperature_K) const;  // h/RT - s/R
+  [[nodiscard]] double cp_over_R(units::Temperature temperature) const;
+  [[nodiscard]] double h_over_RT(units::Temperature temperature) const;
+  [[nodiscard]] double s_over_R(units::Temperature temperature) const;
+  [[nodiscard]] double g_over_RT(units::Temperature temperature) const;  // h/RT - s/R
 
-  // The same without the range check, for solver inner loops that checked the range once.
+  // The same without the range check, for solver inner loops that checked the range once; they take
+  // raw kelvins because they are the inner loop.
   [[nodiscard]] double cp_over_R_unchecked(double temperature_K) const;
   [[nodiscard]] double h_over_RT_unchecked(double temperature_K) const;
   [[nodiscard]] double s_over_R_unchecked(double temperature_K) const;
@@ -86,7 +87,7 @@ class Species {
 
  private:
   [[nodiscard]] const Nasa7& coefficients_for(double temperature_K) const {
-    return temperature_K < record_.range.mid_K ? record_.below_mid : record_.above_mid;
+    return temperature_K < record_.range.mid.value() ? record_.below_mid : record_.above_mid;
   }
 
   SpeciesRecord record_;

@@ -53,10 +53,10 @@ extern "C" int LLVMFuzzerTestOneInput(const std::uint8_t* data, std::size_t size
   if (b.total() <= 0.0) return 0;
   try {
     const core::EquilibriumSolver solver(db, b);
-    const double T = bytes.in_range(std::max(300.0, solver.min_temperature_K()),
-                                    std::min(5000.0, solver.max_temperature_K()));
+    const double T = bytes.in_range(std::max(300.0, solver.min_temperature().value()),
+                                    std::min(5000.0, solver.max_temperature().value()));
     const double P = std::pow(10.0, bytes.in_range(3.0, 7.0));
-    check_result(db, b, solver.solve_tp(b, T, P));
+    check_result(db, b, solver.solve_tp(b, stackbound::units::kelvin(T), stackbound::units::pascals(P)));
   } catch (const stackbound::units::InputError&) {
   } catch (const core::ConvergenceError&) {
   }

@@ -20,6 +20,8 @@ struct NormalConditions {
   // Ideal-gas molar volume at these conditions, m3/mol.
   [[nodiscard]] double molar_volume_m3_per_mol() const;
   [[nodiscard]] MolarVolume molar_volume() const { return cubic_metres_per_mole(molar_volume_m3_per_mol()); }
+  [[nodiscard]] Temperature temperature() const { return kelvin(temperature_K); }
+  [[nodiscard]] Pressure pressure() const { return pascals(pressure_Pa); }
 };
 
 // Presets (DESIGN section 3).

@@ -1,8 +1,11 @@
 #pragma once
 // Quantity types used at every library boundary (Boost.Units, SI system).
-// Temperature is always absolute (kelvin); a temperature difference is a TemperatureDifference.
+// Temperature is always absolute (kelvin) and is an affine quantity: two temperatures subtract to a
+// TemperatureDifference, a difference adds to a temperature, but two temperatures do not add (the
+// sum of 300 K and 300 K is not a temperature of anything). Boost.Units enforces that at compile time.
 // Raw doubles are for dimensionless ratios and solver inner loops; their names carry the unit.
 
+#include <boost/units/absolute.hpp>
 #include <boost/units/physical_dimensions.hpp>
 #include <boost/units/quantity.hpp>
 #include <boost/units/systems/si.hpp>
@@ -11,7 +14,8 @@ namespace stackbound::units {
 
 namespace bu = boost::units;
 
-using Temperature = bu::quantity<bu::si::temperature>;
+using Temperature = bu::quantity<bu::absolute<bu::si::temperature>>;  // absolute, K
+using TemperatureDifference = bu::quantity<bu::si::temperature>;     // a difference of two, K
 using Pressure = bu::quantity<bu::si::pressure>;
 using Amount = bu::quantity<bu::si::amount>;
 using Mass = bu::quantity<bu::si::mass>;
@@ -27,6 +31,7 @@ using MolarVolumeUnit = bu::divide_typeof_helper<bu::si::volume, bu::si::amount>
 using MolarEnergyUnit = bu::divide_typeof_helper<bu::si::energy, bu::si::amount>::type;
 using SpecificEnergyUnit = bu::divide_typeof_helper<bu::si::energy, bu::si::mass>::type;
 using MolarEntropyUnit = bu::divide_typeof_helper<MolarEnergyUnit, bu::si::temperature>::type;
+using HeatCapacityUnit = bu::divide_typeof_helper<bu::si::energy, bu::si::temperature>::type;
 using MassPerAmountUnit = MolarMassUnit;
 
 using MolarMass = bu::quantity<MolarMassUnit>;
@@ -36,14 +41,11 @@ using MolarVolume = bu::quantity<MolarVolumeUnit>;
 using MolarEnergy = bu::quantity<MolarEnergyUnit>;          // J/mol: molar enthalpy, Gibbs energy
 using MolarEntropy = bu::quantity<MolarEntropyUnit>;        // J/(mol K): molar entropy, heat capacity
 using SpecificEnergy = bu::quantity<SpecificEnergyUnit>;    // J/kg: heating values by mass
-
-// A temperature difference is its own type, so that an absolute temperature cannot be added by mistake.
-struct TemperatureDifference {
-  double kelvin = 0.0;
-};
+using HeatCapacity = bu::quantity<HeatCapacityUnit>;        // J/K: heat capacity of an amount of gas
 
 // Constructors from SI numbers, so call sites read as `kelvin(1800.0)`.
-inline Temperature kelvin(double value) { return value * bu::si::kelvin; }
+inline Temperature kelvin(double value) { return Temperature::from_value(value); }
+inline TemperatureDifference kelvin_difference(double value) { return TemperatureDifference::from_value(value); }
 inline Pressure pascals(double value) { return value * bu::si::pascal; }
 inline Amount moles(double value) { return value * bu::si::mole; }
 inline Mass kilograms(double value) { return value * bu::si::kilogram; }
@@ -57,5 +59,6 @@ inline MolarVolume cubic_metres_per_mole(double value) { return MolarVolume::fro
 inline MolarEnergy joules_per_mole(double value) { return MolarEnergy::from_value(value); }
 inline MolarEntropy joules_per_mole_kelvin(double value) { return MolarEntropy::from_value(value); }
 inline SpecificEnergy joules_per_kilogram(double value) { return SpecificEnergy::from_value(value); }
+inline HeatCapacity joules_per_kelvin(double value) { return HeatCapacity::from_value(value); }
 
 }  // namespace stackbound::units

@@ -103,7 +103,7 @@ TEST(Runner, CaseFileAndLibraryCallsGiveIdenticalNumbers) {
   core::ElementAmounts elements;
   elements.moles = combustion.reactant_element_mol_per_kg;
   const core::EquilibriumSolver solver(db, elements);
-  const core::EquilibriumResult eq = solver.solve_tp(elements, 1620.0, 101325.0);
+  const core::EquilibriumResult eq = solver.solve_tp(elements, units::kelvin(1620.0), units::pascals(101325.0));
   const core::FuelFeed feed = core::resolve_feed(fuel, "0.65 t/h");
   emissions::StackEmissionInput input{
       .pollutant = emissions::pollutant_by_name("NOx", "test"),

@@ -31,7 +31,8 @@ TEST(EquilibriumCommand, JsonCarriesTheLibraryResult) {
   const nlohmann::json json = nlohmann::json::parse(run.out);
   const std::vector<core::SpeciesAmount> feed{{"CH4", 1.0}, {"O2", 2.4}, {"N2", 9.03}};
   const core::ElementAmounts b = core::element_amounts(builtin_species(), feed);
-  const core::EquilibriumResult expected = core::EquilibriumSolver(builtin_species(), b).solve_tp(b, 1800.0, 2e5);
+  const core::EquilibriumResult expected =
+      core::EquilibriumSolver(builtin_species(), b).solve_tp(b, units::kelvin(1800.0), units::pascals(2e5));
   EXPECT_TRUE(is_close(json.at("temperature_K").get<double>(), 1800.0, 1e-15));
   EXPECT_TRUE(is_close(json.at("pressure_Pa").get<double>(), 2e5, 1e-15));
   EXPECT_TRUE(is_close(json.at("total_moles").get<double>(), expected.total_gas_moles, 1e-12));
@@ -59,7 +60,8 @@ TEST(EquilibriumCommand, AdiabaticFromTheFeedTemperatureWithRestrictedProducts) 
   const core::ElementAmounts b = core::element_amounts(builtin_species(), feed);
   const core::EquilibriumSolver solver(builtin_species(), b, {"H2O", "H2", "O2", "OH", "H", "O", "N2"});
   const core::EquilibriumResult expected =
-      solver.solve_hp(b, core::feed_enthalpy_J(builtin_species(), feed, 400.0), units::kStandardAtmosphere_Pa);
+      solver.solve_hp(b, core::feed_enthalpy(builtin_species(), feed, units::kelvin(400.0)),
+                      units::pascals(units::kStandardAtmosphere_Pa));
   EXPECT_NEAR(json.at("temperature_K").get<double>(), expected.temperature_K, 1e-6);
   EXPECT_TRUE(is_close(json.at("feed_temperature_K").get<double>(), 400.0, 1e-15));
   EXPECT_EQ(json.at("mode").get<std::string>(), "adiabatic");

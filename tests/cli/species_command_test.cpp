@@ -54,10 +54,14 @@ TEST(SpeciesCommand, JsonValuesAreTheLibraryValues) {
     EXPECT_EQ(json.at("name").get<std::string>(), c.name);
     EXPECT_TRUE(is_close(json.at("temperature_K").get<double>(), T, 1e-14)) << c.name;
     // JSON numbers are written with round-trip precision, so only arithmetic rounding may differ.
-    EXPECT_TRUE(is_close(json.at("cp_J_per_mol_K").get<double>(), R * species.cp_over_R(T), 1e-12)) << c.name;
-    EXPECT_TRUE(is_close(json.at("h_J_per_mol").get<double>(), R * T * species.h_over_RT(T), 1e-12)) << c.name;
-    EXPECT_TRUE(is_close(json.at("s_J_per_mol_K").get<double>(), R * species.s_over_R(T), 1e-12)) << c.name;
-    EXPECT_TRUE(is_close(json.at("g_J_per_mol").get<double>(), R * T * species.g_over_RT(T), 1e-12)) << c.name;
+    EXPECT_TRUE(is_close(json.at("cp_J_per_mol_K").get<double>(), R * species.cp_over_R(units::kelvin(T)), 1e-12))
+        << c.name;
+    EXPECT_TRUE(is_close(json.at("h_J_per_mol").get<double>(), R * T * species.h_over_RT(units::kelvin(T)), 1e-12))
+        << c.name;
+    EXPECT_TRUE(is_close(json.at("s_J_per_mol_K").get<double>(), R * species.s_over_R(units::kelvin(T)), 1e-12))
+        << c.name;
+    EXPECT_TRUE(is_close(json.at("g_J_per_mol").get<double>(), R * T * species.g_over_RT(units::kelvin(T)), 1e-12))
+        << c.name;
     // And g = h - T s holds in what the user reads.
     EXPECT_TRUE(is_close(json.at("g_J_per_mol").get<double>(),
                          json.at("h_J_per_mol").get<double>() - T * json.at("s_J_per_mol_K").get<double>(), 1e-9, 1e-6))
@@ -96,8 +100,8 @@ TEST(SpeciesCommand, TextListingShowsEverySpeciesWithMolarMassRangeAndSource) {
     const std::vector<std::string>& columns = lines.at(species.formula());
     ASSERT_EQ(columns.size(), 5u) << species.formula();  // M, T_low, T_high, phase, source
     EXPECT_TRUE(is_close(std::stod(columns[0]), species.molar_mass_kg_per_mol() * 1e3, 0.0, 5e-6)) << species.formula();
-    EXPECT_TRUE(is_close(std::stod(columns[1]), species.range().low_K, 0.0, 5e-3)) << species.formula();
-    EXPECT_TRUE(is_close(std::stod(columns[2]), species.range().high_K, 0.0, 5e-3)) << species.formula();
+    EXPECT_TRUE(is_close(std::stod(columns[1]), species.range().low.value(), 0.0, 5e-3)) << species.formula();
+    EXPECT_TRUE(is_close(std::stod(columns[2]), species.range().high.value(), 0.0, 5e-3)) << species.formula();
     EXPECT_EQ(columns[3], species.is_gas() ? "gas" : "condensed");
     EXPECT_EQ(columns[4], species.source());
   }
@@ -115,8 +119,8 @@ TEST(SpeciesCommand, JsonListingHasEverySpeciesWithMolarMassRangeAndSource) {
     EXPECT_TRUE(is_close(entry.at("molar_mass_g_per_mol").get<double>(), species.molar_mass_kg_per_mol() * 1e3, 1e-14));
     const auto range = entry.at("temperature_range_K").get<std::vector<double>>();
     ASSERT_EQ(range.size(), 3u);
-    EXPECT_TRUE(is_close(range[0], species.range().low_K, 1e-14));
-    EXPECT_TRUE(is_close(range[2], species.range().high_K, 1e-14));
+    EXPECT_TRUE(is_close(range[0], species.range().low.value(), 1e-14));
+    EXPECT_TRUE(is_close(range[2], species.range().high.value(), 1e-14));
     EXPECT_EQ(entry.at("source").get<std::string>(), species.source());
     EXPECT_FALSE(entry.at("composition").empty());
   }

@@ -93,7 +93,8 @@ std::vector<Computed> cold_grid() {
   std::vector<Computed> computed;
   grid::for_each_cold_point([&](const grid::Point& point, const EquilibriumSolver& solver, const ElementAmounts& b) {
     try {
-      computed.push_back({point, fingerprint_of(solver.solve_tp(b, point.temperature_K, point.pressure_Pa()))});
+      computed.push_back({point, fingerprint_of(solver.solve_tp(b, units::kelvin(point.temperature_K),
+                                                                units::pascals(point.pressure_Pa())))});
     } catch (const std::exception& error) {
       computed.push_back({point, fingerprint_of_error(error)});
     }
@@ -108,8 +109,8 @@ std::vector<Computed> warm_sweep() {
   bool have_previous = false;
   grid::for_each_sweep_point([&](const grid::Point& point, const EquilibriumSolver& solver, const ElementAmounts& b) {
     try {
-      EquilibriumResult r =
-          solver.solve_tp(b, point.temperature_K, point.pressure_Pa(), have_previous ? &previous : nullptr);
+      EquilibriumResult r = solver.solve_tp(b, units::kelvin(point.temperature_K), units::pascals(point.pressure_Pa()),
+                                            have_previous ? &previous : nullptr);
       computed.push_back({point, fingerprint_of(r)});
       previous = std::move(r);
       have_previous = true;

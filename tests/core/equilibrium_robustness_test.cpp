@@ -54,7 +54,8 @@ TEST(EquilibriumRobustness, EveryPointOfTheColdStartGridConverges) {
   grid::for_each_cold_point([&](const grid::Point& point, const EquilibriumSolver& solver, const ElementAmounts& b) {
     ++summary.points;
     try {
-      const EquilibriumResult r = solver.solve_tp(b, point.temperature_K, point.pressure_Pa());
+      const EquilibriumResult r =
+          solver.solve_tp(b, units::kelvin(point.temperature_K), units::pascals(point.pressure_Pa()));
       if (r.iterations > 35)
         std::cout << "SLOW " << point.fuel << " " << point.phi << " " << point.temperature_K << " "
                   << point.pressure_atm << " " << r.iterations << "\n";
@@ -85,8 +86,8 @@ TEST(EquilibriumRobustness, AWarmStartedSweepOverTheGridConverges) {
   grid::for_each_sweep_point([&](const grid::Point& point, const EquilibriumSolver& solver, const ElementAmounts& b) {
     ++summary.points;
     try {
-      EquilibriumResult r =
-          solver.solve_tp(b, point.temperature_K, point.pressure_Pa(), have_previous ? &previous : nullptr);
+      EquilibriumResult r = solver.solve_tp(b, units::kelvin(point.temperature_K), units::pascals(point.pressure_Pa()),
+                                            have_previous ? &previous : nullptr);
       check_point(r, b, summary);
       previous = std::move(r);
       have_previous = true;

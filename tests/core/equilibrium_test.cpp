@@ -48,7 +48,7 @@ Solved solve(const std::vector<SpeciesAmount>& feed, double T, double P = kAtm_P
              std::vector<std::string> candidates = {}) {
   const ElementAmounts b = element_amounts(db(), feed);
   const EquilibriumSolver solver(db(), b, std::move(candidates));
-  return {b, solver.solve_tp(b, T, P)};
+  return {b, solver.solve_tp(b, units::kelvin(T), units::pascals(P))};
 }
 
 // Element totals of the result, recomputed from the species' compositions (independent of the solver).
@@ -87,12 +87,12 @@ double gibbs_change_over_RT(const std::vector<std::string>& species, const std::
   for (std::size_t i = 0; i < species.size(); ++i) {
     const Species& s = db().at(species[i]);
     if (!s.is_gas()) {
-      change += delta[i] * s.g_over_RT(T);
+      change += delta[i] * s.g_over_RT(units::kelvin(T));
       continue;
     }
     if (moles[i] <= 0.0) continue;
     const double chemical_potential =
-        s.g_over_RT(T) + std::log(moles[i] / gas) + std::log(P / units::kStandardStatePressure_Pa);
+        s.g_over_RT(units::kelvin(T)) + std::log(moles[i] / gas) + std::log(P / units::kStandardStatePressure_Pa);
     const double ln_fraction_ratio = std::log1p(delta[i] / moles[i]) - ln_total_ratio;
     // (n + d)(mu + ln ratio) - n mu
     change += delta[i] * (chemical_potential + ln_fraction_ratio) + moles[i] * ln_fraction_ratio;
@@ -203,9 +203,9 @@ TEST(FeedEnthalpy, IsTheSumOfTheSpeciesEnthalpiesAtTheFeedTemperature) {
     const double expected = 1.0 * db().at("CH4").enthalpy(units::kelvin(T)).value() +
                             2.0 * db().at("O2").enthalpy(units::kelvin(T)).value() +
                             7.52 * db().at("N2").enthalpy(units::kelvin(T)).value();
-    EXPECT_TRUE(is_close(feed_enthalpy_J(db(), feed, T), expected, 1e-13)) << T;
+    EXPECT_TRUE(is_close(feed_enthalpy(db(), feed, units::kelvin(T)).value(), expected, 1e-13)) << T;
   }
-  EXPECT_THROW_WITH((void)feed_enthalpy_J(db(), feed, 4000.0), units::InputError,
+  EXPECT_THROW_WITH((void)feed_enthalpy(db(), feed, units::kelvin(4000.0)).value(), units::InputError,
                     "feed temperature = 4000 K: outside the data range 200-3500 K of CH4");
 }
 
@@ -227,10 +227,25 @@ TEST(EquilibriumSolver, DefaultProductsAreEverySpeciesOfTheFeedsElementsGasesFir
   EXPECT_EQ(static_cast<std::size_t>(
                 std::count_if(names.begin(), names.end(), [](const std::string& n) { return !db().at(n).is_gas(); })),
             1u);
-  EXPECT_TRUE(is_close(solver.max_temperature_K(), 3500.0, 1e-15));
+  EXPECT_TRUE(is_close(solver.max_temperature().value(), 3500.0, 1e-15));
 }
 
 // Wrong if a product list that cannot hold the feed were accepted and failed later, or silently.
+// Wrong if the typed boundary changed a number on the way in or out: the quantities must carry exactly
+// the doubles of the raw fields, and the solve at typed T and P must land on them.
+TEST(EquilibriumSolver, TypedStateCarriesTheRawNumbersExactly) {
+  const Solved s = solve(methane_air(1.0), 1900.0, 2.0 * kAtm_Pa);
+  EXPECT_EQ(s.result.temperature().value(), 1900.0);
+  EXPECT_EQ(s.result.pressure().value(), 2.0 * kAtm_Pa);
+  EXPECT_EQ(s.result.temperature().value(), s.result.temperature_K);
+  EXPECT_EQ(s.result.pressure().value(), s.result.pressure_Pa);
+  EXPECT_EQ(s.result.enthalpy().value(), s.result.enthalpy_J);
+  EXPECT_EQ(s.result.total_gas_amount().value(), s.result.total_gas_moles);
+  const EquilibriumSolver solver(db(), s.b);
+  EXPECT_EQ(solver.max_temperature().value(), 3500.0);
+  EXPECT_LT(solver.min_temperature().value(), solver.max_temperature().value());
+}
+
 TEST(EquilibriumSolver, RejectsProductListsThatCannotHoldTheFeed) {
   const ElementAmounts b = element_amounts(db(), methane_air(1.0));
   EXPECT_THROW_WITH(EquilibriumSolver(db(), b, {"CO2", "H2O", "N2", "Xx"}), units::InputError,
@@ -257,8 +272,9 @@ TEST(EquilibriumSolver, OutlivesTheDatabaseItWasBuiltFrom) {
     solver.emplace(copy, b);
   }
   const SpeciesDatabase scribble = db();  // likely to reuse the freed storage
-  const EquilibriumResult result = solver->solve_tp(b, 2000.0, kAtm_Pa);
-  const EquilibriumResult reference = EquilibriumSolver(db(), b).solve_tp(b, 2000.0, kAtm_Pa);
+  const EquilibriumResult result = solver->solve_tp(b, units::kelvin(2000.0), units::pascals(kAtm_Pa));
+  const EquilibriumResult reference =
+      EquilibriumSolver(db(), b).solve_tp(b, units::kelvin(2000.0), units::pascals(kAtm_Pa));
   EXPECT_TRUE(is_close(result.mole_fraction("NO"), reference.mole_fraction("NO"), 1e-12));
   EXPECT_EQ(scribble.size(), db().size());
 }
@@ -268,12 +284,12 @@ TEST(EquilibriumSolver, RejectsElementProportionsTheProductsCannotReach) {
   // CO fed, only CO2 and O2 allowed: C/O = 1/1 needs a negative amount of O2.
   const ElementAmounts co = element_amounts(db(), std::vector<SpeciesAmount>{{"CO", 1.0}});
   const EquilibriumSolver independent(db(), co, {"CO2", "O2"});
-  EXPECT_THROW_WITH((void)independent.solve_tp(co, 2000.0, kAtm_Pa), units::InputError,
+  EXPECT_THROW_WITH((void)independent.solve_tp(co, units::kelvin(2000.0), units::pascals(kAtm_Pa)), units::InputError,
                     "cannot hold the feed's elements in its proportions");
   // Only CO allowed: its C and O rows are dependent; CO2 fed cannot be held.
   const ElementAmounts co2 = element_amounts(db(), std::vector<SpeciesAmount>{{"CO2", 1.0}});
   const EquilibriumSolver dependent(db(), co2, {"CO"});
-  EXPECT_THROW_WITH((void)dependent.solve_tp(co2, 2000.0, kAtm_Pa), units::InputError,
+  EXPECT_THROW_WITH((void)dependent.solve_tp(co2, units::kelvin(2000.0), units::pascals(kAtm_Pa)), units::InputError,
                     "cannot hold the feed's elements in its proportions");
 }
 
@@ -372,7 +388,7 @@ TEST(Equilibrium, GraphiteAppearsExactlyWhenItsChemicalPotentialTestSaysSo) {
   for (const double phi : {0.8, 1.0, 1.5, 2.0, 2.5, 3.0, 4.0}) {
     for (const double T : {700.0, 1000.0, 1400.0, 2000.0}) {
       const Solved s = solve(methane_air(phi), T);
-      const double affinity = graphite.g_over_RT(T) - s.result.element_potentials[carbon];
+      const double affinity = graphite.g_over_RT(units::kelvin(T)) - s.result.element_potentials[carbon];
       if (s.result.graphite_present) {
         ++present;
         EXPECT_GT(s.result.moles_of("C(gr)"), 0.0);
@@ -399,7 +415,7 @@ TEST(Equilibrium, TraceSpeciesFarBelowOnePartIn1e30AreExactAndPositive) {
   for (std::size_t i = 0; i < s.result.species.size(); ++i) {
     const Species& species = db().at(s.result.species[i]);
     if (!species.is_gas()) continue;
-    double ln_x = -species.g_over_RT(800.0) - std::log(kAtm_Pa / units::kStandardStatePressure_Pa);
+    double ln_x = -species.g_over_RT(units::kelvin(800.0)) - std::log(kAtm_Pa / units::kStandardStatePressure_Pa);
     for (std::size_t k = 0; k < kElementCount; ++k) {
       ln_x += species.atoms_of(known_elements()[k].symbol) * s.result.element_potentials[k];
     }
@@ -429,7 +445,7 @@ TEST(Equilibrium, AnElementWithZeroAmountDropsItsSpeciesForThatSolve) {
   sour.push_back({"H2S", 0.01});
   const EquilibriumSolver solver(db(), element_amounts(db(), sour));
   const ElementAmounts sweet = element_amounts(db(), methane_air(1.0));
-  const EquilibriumResult with_solver = solver.solve_tp(sweet, 2000.0, kAtm_Pa);
+  const EquilibriumResult with_solver = solver.solve_tp(sweet, units::kelvin(2000.0), units::pascals(kAtm_Pa));
   const EquilibriumResult reference = solve(methane_air(1.0), 2000.0).result;
   EXPECT_EQ(with_solver.moles_of("SO2"), 0.0);
   EXPECT_EQ(with_solver.moles_of("H2S"), 0.0);
@@ -444,21 +460,24 @@ TEST(Equilibrium, AnElementWithZeroAmountDropsItsSpeciesForThatSolve) {
 TEST(Equilibrium, AWarmStartGivesTheColdStartAnswer) {
   const ElementAmounts b = element_amounts(db(), methane_air(1.3));
   const EquilibriumSolver solver(db(), b);
-  const EquilibriumResult cold = solver.solve_tp(b, 2000.0, 2.0 * kAtm_Pa);
-  const EquilibriumResult nearby = solver.solve_tp(b, 1950.0, 2.0 * kAtm_Pa);
-  const EquilibriumResult other_pressure = solver.solve_tp(b, 1990.0, 5.0 * kAtm_Pa);
-  const EquilibriumResult other_feed = solver.solve_tp(element_amounts(db(), methane_air(0.7)), 2010.0, 2.0 * kAtm_Pa);
+  const EquilibriumResult cold = solver.solve_tp(b, units::kelvin(2000.0), units::pascals(2.0 * kAtm_Pa));
+  const EquilibriumResult nearby = solver.solve_tp(b, units::kelvin(1950.0), units::pascals(2.0 * kAtm_Pa));
+  const EquilibriumResult other_pressure = solver.solve_tp(b, units::kelvin(1990.0), units::pascals(5.0 * kAtm_Pa));
+  const EquilibriumResult other_feed =
+      solver.solve_tp(element_amounts(db(), methane_air(0.7)), units::kelvin(2010.0), units::pascals(2.0 * kAtm_Pa));
   const ElementAmounts sour_b =
       element_amounts(db(), std::vector<SpeciesAmount>{{"CH4", 1.0}, {"H2S", 0.1}, {"O2", 2.0}});
-  const EquilibriumResult other_solver = EquilibriumSolver(db(), sour_b).solve_tp(sour_b, 2000.0, 2.0 * kAtm_Pa);
+  const EquilibriumResult other_solver =
+      EquilibriumSolver(db(), sour_b).solve_tp(sour_b, units::kelvin(2000.0), units::pascals(2.0 * kAtm_Pa));
   for (const EquilibriumResult* seed : {&nearby, &other_pressure, &other_feed, &other_solver}) {
-    const EquilibriumResult warm = solver.solve_tp(b, 2000.0, 2.0 * kAtm_Pa, seed);
+    const EquilibriumResult warm = solver.solve_tp(b, units::kelvin(2000.0), units::pascals(2.0 * kAtm_Pa), seed);
     for (std::size_t i = 0; i < cold.species.size(); ++i) {
       EXPECT_TRUE(is_close(warm.moles[i], cold.moles[i], 1e-9, 1e-300)) << cold.species[i];
     }
   }
   // The predictor start from 50 K away saves work.
-  EXPECT_LT(solver.solve_tp(b, 2000.0, 2.0 * kAtm_Pa, &nearby).iterations, cold.iterations);
+  EXPECT_LT(solver.solve_tp(b, units::kelvin(2000.0), units::pascals(2.0 * kAtm_Pa), &nearby).iterations,
+            cold.iterations);
 }
 
 // Wrong if pressure entered other than as ln(P / 1 bar): at 1 bar the solution of the mole-number
@@ -480,21 +499,24 @@ TEST(Equilibrium, PressureEntersThroughLnPOverOneBar) {
 TEST(Equilibrium, RejectsTemperaturePressureAndElementsItCannotUse) {
   const ElementAmounts b = element_amounts(db(), methane_air(1.0));
   const EquilibriumSolver solver(db(), b);
-  EXPECT_THROW_WITH((void)solver.solve_tp(b, 3600.0, kAtm_Pa), units::InputError,
+  EXPECT_THROW_WITH((void)solver.solve_tp(b, units::kelvin(3600.0), units::pascals(kAtm_Pa)), units::InputError,
                     "temperature = 3600 K: outside the data range of product CO2 (200-3500 K)");
-  EXPECT_THROW_WITH((void)solver.solve_tp(b, 150.0, kAtm_Pa), units::InputError, "temperature = 150 K");
-  EXPECT_THROW_WITH((void)solver.solve_tp(b, std::nan(""), kAtm_Pa), units::InputError,
+  EXPECT_THROW_WITH((void)solver.solve_tp(b, units::kelvin(150.0), units::pascals(kAtm_Pa)), units::InputError,
+                    "temperature = 150 K");
+  EXPECT_THROW_WITH((void)solver.solve_tp(b, units::kelvin(std::nan("")), units::pascals(kAtm_Pa)), units::InputError,
                     "must be a finite absolute temperature");
-  EXPECT_THROW_WITH((void)solver.solve_tp(b, 2000.0, 0.0), units::InputError, "pressure = 0 Pa");
+  EXPECT_THROW_WITH((void)solver.solve_tp(b, units::kelvin(2000.0), units::pascals(0.0)), units::InputError,
+                    "pressure = 0 Pa");
   ElementAmounts with_sulfur = b;
   with_sulfur.moles[element_index("S")] = 0.1;
-  EXPECT_THROW_WITH((void)solver.solve_tp(with_sulfur, 2000.0, kAtm_Pa), units::InputError,
-                    "S = 0.1 mol, but this solver was built for the elements C, H, O, N only");
+  EXPECT_THROW_WITH((void)solver.solve_tp(with_sulfur, units::kelvin(2000.0), units::pascals(kAtm_Pa)),
+                    units::InputError, "S = 0.1 mol, but this solver was built for the elements C, H, O, N only");
   ElementAmounts negative = b;
   negative.moles[element_index("H")] = -1.0;
-  EXPECT_THROW_WITH((void)solver.solve_tp(negative, 2000.0, kAtm_Pa), units::InputError, "H = -1");
-  EXPECT_THROW_WITH((void)solver.solve_tp(ElementAmounts{}, 2000.0, kAtm_Pa), units::InputError,
-                    "every element amount is zero");
+  EXPECT_THROW_WITH((void)solver.solve_tp(negative, units::kelvin(2000.0), units::pascals(kAtm_Pa)), units::InputError,
+                    "H = -1");
+  EXPECT_THROW_WITH((void)solver.solve_tp(ElementAmounts{}, units::kelvin(2000.0), units::pascals(kAtm_Pa)),
+                    units::InputError, "every element amount is zero");
 }
 
 // Wrong if a failure to converge returned a result instead of an error with the diagnostics.
@@ -504,7 +526,7 @@ TEST(Equilibrium, NonConvergenceIsAnErrorCarryingTheDiagnostics) {
   options.max_iterations = 2;
   const EquilibriumSolver solver(db(), b, {}, options);
   try {
-    (void)solver.solve_tp(b, 2000.0, kAtm_Pa);
+    (void)solver.solve_tp(b, units::kelvin(2000.0), units::pascals(kAtm_Pa));
     ADD_FAILURE() << "expected ConvergenceError";
   } catch (const ConvergenceError& error) {
     EXPECT_EQ(error.iterations(), 2);
@@ -524,9 +546,9 @@ TEST(AdiabaticFlame, ProductsEnthalpyEqualsTheFeedEnthalpy) {
   for (const double phi : {0.6, 1.0, 1.4}) {
     const std::vector<SpeciesAmount> feed = methane_air(phi);
     const ElementAmounts b = element_amounts(db(), feed);
-    const double target_J = feed_enthalpy_J(db(), feed, 298.15);
+    const double target_J = feed_enthalpy(db(), feed, units::kelvin(298.15)).value();
     const EquilibriumSolver solver(db(), b);
-    const EquilibriumResult hot = solver.solve_hp(b, target_J, kAtm_Pa);
+    const EquilibriumResult hot = solver.solve_hp(b, units::joules(target_J), units::pascals(kAtm_Pa));
     EXPECT_NEAR(hot.enthalpy_J, target_J, 1e-5 * hot.equilibrium_heat_capacity_J_per_K) << phi;
     // The products' enthalpy recomputed from the species data.
     double enthalpy_J = 0.0;
@@ -545,9 +567,10 @@ TEST(AdiabaticFlame, EquilibriumHeatCapacityIsTheEnthalpySlope) {
   const EquilibriumSolver solver(db(), b);
   const double dT = 0.01;
   for (const double T : {1200.0, 2200.0, 3000.0}) {
-    const EquilibriumResult at = solver.solve_tp(b, T, kAtm_Pa);
-    const double slope =
-        (solver.solve_tp(b, T + dT, kAtm_Pa).enthalpy_J - solver.solve_tp(b, T - dT, kAtm_Pa).enthalpy_J) / (2 * dT);
+    const EquilibriumResult at = solver.solve_tp(b, units::kelvin(T), units::pascals(kAtm_Pa));
+    const double slope = (solver.solve_tp(b, units::kelvin(T + dT), units::pascals(kAtm_Pa)).enthalpy_J -
+                          solver.solve_tp(b, units::kelvin(T - dT), units::pascals(kAtm_Pa)).enthalpy_J) /
+                         (2 * dT);
     EXPECT_TRUE(is_close(at.equilibrium_heat_capacity_J_per_K, slope, 1e-5)) << T;
     EXPECT_GE(at.equilibrium_heat_capacity_J_per_K, at.frozen_heat_capacity_J_per_K);
   }
@@ -556,17 +579,19 @@ TEST(AdiabaticFlame, EquilibriumHeatCapacityIsTheEnthalpySlope) {
 // Wrong if the heat loss were not taken from the heating value, or lowered T by the wrong amount.
 TEST(AdiabaticFlame, HeatLossLowersTheTemperatureToTheReducedEnthalpy) {
   const std::vector<SpeciesAmount> feed = methane_air(1.0);
-  const FeedStream stream{feed, 298.15};
+  const FeedStream stream{feed, units::kelvin(298.15)};
   AdiabaticFlameOptions options;
   const EquilibriumResult adiabatic = adiabatic_flame(db(), std::span<const FeedStream>(&stream, 1), options);
   options.heat_loss_fraction = 0.1;
   const EquilibriumResult lossy = adiabatic_flame(db(), std::span<const FeedStream>(&stream, 1), options);
-  const double hhv_J = feed_heating_value_J(db(), feed, HeatingValueKind::higher);
+  const double hhv_J = feed_heating_value(db(), feed, HeatingValueKind::higher).value();
   EXPECT_LT(lossy.temperature_K, adiabatic.temperature_K - 50.0);
-  EXPECT_NEAR(lossy.enthalpy_J, feed_enthalpy_J(db(), feed, 298.15) - 0.1 * hhv_J,
+  EXPECT_NEAR(lossy.enthalpy_J, feed_enthalpy(db(), feed, units::kelvin(298.15)).value() - 0.1 * hhv_J,
               1e-5 * lossy.equilibrium_heat_capacity_J_per_K);
-  EXPECT_THROW_WITH((void)hp_target_enthalpy_J(0.0, 1.0, hhv_J), units::InputError, "heat loss = 1: must be");
-  EXPECT_THROW_WITH((void)hp_target_enthalpy_J(0.0, -0.1, hhv_J), units::InputError, "heat loss = -0.1");
+  EXPECT_THROW_WITH((void)hp_target_enthalpy(units::joules(0.0), 1.0, units::joules(hhv_J)), units::InputError,
+                    "heat loss = 1: must be");
+  EXPECT_THROW_WITH((void)hp_target_enthalpy(units::joules(0.0), -0.1, units::joules(hhv_J)), units::InputError,
+                    "heat loss = -0.1");
 }
 
 // Wrong if the heating value burned the wrong products or missed the water's condensation.
@@ -583,8 +608,8 @@ TEST(AdiabaticFlame, HeatingValueOfMethaneMatchesTheJanafFormationEnthalpies) {
   EXPECT_LT(std::abs(data_difference_J), 500.0);  // the data sets agree to 0.5 kJ/mol
   // Non-fuel species (O2, N2, CO2, H2O) must add nothing.
   const std::vector<SpeciesAmount> feed{{"CH4", 2.0}, {"O2", 1.0}, {"N2", 5.0}, {"CO2", 0.5}, {"H2O", 0.3}};
-  const double lhv = feed_heating_value_J(db(), feed, HeatingValueKind::lower) / 2.0;
-  const double hhv = feed_heating_value_J(db(), feed, HeatingValueKind::higher) / 2.0;
+  const double lhv = feed_heating_value(db(), feed, HeatingValueKind::lower).value() / 2.0;
+  const double hhv = feed_heating_value(db(), feed, HeatingValueKind::higher).value() / 2.0;
   // JANAF prints kJ/mol to 3 decimals: four rounded values, 2 J/mol.
   EXPECT_NEAR(lhv, 802301.0 + data_difference_J, 2.0);
   // HHV - LHV: the vaporisation enthalpy of the 2 mol of water formed, 2 x 44.004 kJ/mol
@@ -597,13 +622,14 @@ TEST(AdiabaticFlame, RefusesFlamesHotterOrColderThanTheData) {
   const std::vector<SpeciesAmount> feed{{"H2", 2.0}, {"O2", 1.0}};
   const ElementAmounts b = element_amounts(db(), feed);
   const EquilibriumSolver solver(db(), b);
-  const double at_limit_J = solver.solve_tp(b, 3500.0, kAtm_Pa).enthalpy_J;
-  EXPECT_THROW_WITH((void)solver.solve_hp(b, at_limit_J + 1e5, kAtm_Pa), units::InputError,
-                    "the products would be hotter than 3500 K, the upper end of the species data");
-  const double at_bottom_J = solver.solve_tp(b, 200.0, kAtm_Pa).enthalpy_J;
-  EXPECT_THROW_WITH((void)solver.solve_hp(b, at_bottom_J - 1e3, kAtm_Pa), units::InputError,
-                    "the products would be colder than 200 K");
-  EXPECT_THROW_WITH((void)solver.solve_hp(b, std::nan(""), kAtm_Pa), units::InputError, "must be a finite number");
+  const double at_limit_J = solver.solve_tp(b, units::kelvin(3500.0), units::pascals(kAtm_Pa)).enthalpy_J;
+  EXPECT_THROW_WITH((void)solver.solve_hp(b, units::joules(at_limit_J + 1e5), units::pascals(kAtm_Pa)),
+                    units::InputError, "the products would be hotter than 3500 K, the upper end of the species data");
+  const double at_bottom_J = solver.solve_tp(b, units::kelvin(200.0), units::pascals(kAtm_Pa)).enthalpy_J;
+  EXPECT_THROW_WITH((void)solver.solve_hp(b, units::joules(at_bottom_J - 1e3), units::pascals(kAtm_Pa)),
+                    units::InputError, "the products would be colder than 200 K");
+  EXPECT_THROW_WITH((void)solver.solve_hp(b, units::joules(std::nan("")), units::pascals(kAtm_Pa)), units::InputError,
+                    "must be a finite number");
 }
 
 // Wrong if a warm-started HP solve reached a different temperature, or did not save work.
@@ -611,32 +637,34 @@ TEST(AdiabaticFlame, WarmStartReachesTheSameTemperatureWithLessWork) {
   const std::vector<SpeciesAmount> feed = methane_air(0.9);
   const ElementAmounts b = element_amounts(db(), feed);
   const EquilibriumSolver solver(db(), b);
-  const double target_J = feed_enthalpy_J(db(), feed, 298.15);
-  const EquilibriumResult seed = solver.solve_hp(b, target_J - 5000.0, kAtm_Pa);
-  const EquilibriumResult cold = solver.solve_hp(b, target_J, kAtm_Pa);
-  const EquilibriumResult warm = solver.solve_hp(b, target_J, kAtm_Pa, &seed);
+  const double target_J = feed_enthalpy(db(), feed, units::kelvin(298.15)).value();
+  const EquilibriumResult seed = solver.solve_hp(b, units::joules(target_J - 5000.0), units::pascals(kAtm_Pa));
+  const EquilibriumResult cold = solver.solve_hp(b, units::joules(target_J), units::pascals(kAtm_Pa));
+  const EquilibriumResult warm = solver.solve_hp(b, units::joules(target_J), units::pascals(kAtm_Pa), &seed);
   EXPECT_NEAR(warm.temperature_K, cold.temperature_K, 1e-5);
   EXPECT_LT(warm.iterations, cold.iterations);
 }
 
 // Wrong if a feed that releases no heat did not stay at its own temperature.
 TEST(AdiabaticFlame, AnInertFeedStaysAtItsTemperature) {
-  const FeedStream stream{{{"N2", 3.0}, {"Ar", 1.0}}, 650.0};
+  const FeedStream stream{{{"N2", 3.0}, {"Ar", 1.0}}, units::kelvin(650.0)};
   const EquilibriumResult result = adiabatic_flame(db(), std::span<const FeedStream>(&stream, 1));
   EXPECT_NEAR(result.temperature_K, 650.0, 1e-5);
 }
 
 // Wrong if streams at different temperatures were not each counted at their own temperature.
 TEST(AdiabaticFlame, StreamsEnterAtTheirOwnTemperatures) {
-  const std::vector<FeedStream> split{{{{"CH4", 1.0}}, 298.15}, {{{"O2", 2.0}, {"N2", 7.52}}, 700.0}};
+  const std::vector<FeedStream> split{{{{"CH4", 1.0}}, units::kelvin(298.15)},
+                                      {{{"O2", 2.0}, {"N2", 7.52}}, units::kelvin(700.0)}};
   const EquilibriumResult preheated = adiabatic_flame(db(), split);
   const std::vector<SpeciesAmount> all = methane_air(1.0);
   const ElementAmounts b = element_amounts(db(), all);
-  const double target_J =
-      feed_enthalpy_J(db(), split[0].species, 298.15) + feed_enthalpy_J(db(), split[1].species, 700.0);
-  const EquilibriumResult direct = EquilibriumSolver(db(), b).solve_hp(b, target_J, kAtm_Pa);
+  const double target_J = feed_enthalpy(db(), split[0].species, units::kelvin(298.15)).value() +
+                          feed_enthalpy(db(), split[1].species, units::kelvin(700.0)).value();
+  const EquilibriumResult direct =
+      EquilibriumSolver(db(), b).solve_hp(b, units::joules(target_J), units::pascals(kAtm_Pa));
   EXPECT_NEAR(preheated.temperature_K, direct.temperature_K, 1e-5);
-  const FeedStream cold{all, 298.15};
+  const FeedStream cold{all, units::kelvin(298.15)};
   EXPECT_GT(preheated.temperature_K,
             adiabatic_flame(db(), std::span<const FeedStream>(&cold, 1)).temperature_K + 100.0);
 }

@@ -18,7 +18,7 @@ const SpeciesDatabase& db() { return cases::builtin_species(); }
 
 double weight_kg(const char* symbol) { return element_by_symbol(symbol).atomic_weight_g_per_mol * 1e-3; }
 double h298(const char* formula) {
-  return units::kGasConstant_J_per_mol_K * 298.15 * db().at(formula).h_over_RT(298.15);
+  return units::kGasConstant_J_per_mol_K * 298.15 * db().at(formula).h_over_RT(units::kelvin(298.15));
 }
 
 Fuel gas(std::vector<std::pair<std::string, double>> composition, CompositionBasis basis = CompositionBasis::mole) {
@@ -120,7 +120,7 @@ TEST(GasFuel, HeatingValuesCloseTheEnergyBalanceOfTheSpeciesData) {
   const double o2 = C + H / 4 + S - O / 2;
   const double h_liquid_water = h298("H2O") - 44004.0;  // JANAF H-063/H-064 difference, kJ->J
   const double products = C * h298("CO2") + H / 2 * h_liquid_water + S * h298("SO2") + N / 2 * h298("N2");
-  const double hhv = fuel.enthalpy_J_per_kg(298.15, db()) + o2 * h298("O2") - products;
+  const double hhv = fuel.enthalpy(units::kelvin(298.15), db()).value() + o2 * h298("O2") - products;
   EXPECT_TRUE(is_close(fuel.hhv_J_per_kg(), hhv, 1e-10));
   EXPECT_TRUE(is_close(fuel.hhv_J_per_kg() - fuel.lhv_J_per_kg(), H / 2 * 44004.0, 1e-10));
 }
@@ -134,7 +134,8 @@ TEST(FuelBlend, MoleBlendOfGasesIsTheCombinedGas) {
   EXPECT_EQ(blend.state(), FuelState::gas);
   EXPECT_TRUE(is_close(blend.hhv_J_per_kg(), combined.hhv_J_per_kg(), 1e-12));
   EXPECT_TRUE(is_close(*blend.molar_mass_kg_per_mol(), *combined.molar_mass_kg_per_mol(), 1e-12));
-  EXPECT_TRUE(is_close(blend.enthalpy_J_per_kg(500.0, db()), combined.enthalpy_J_per_kg(500.0, db()), 1e-12));
+  EXPECT_TRUE(is_close(blend.enthalpy(units::kelvin(500.0), db()).value(),
+                       combined.enthalpy(units::kelvin(500.0), db()).value(), 1e-12));
 }
 
 // Wrong if heat-input fractions were taken as mass fractions: the parts must deliver the stated heat shares.
@@ -158,8 +159,10 @@ TEST(FuelBlend, MassBlendWeightsPerKilogramProperties) {
   const Fuel blend = Fuel::blend("oil + wood", {{oil, 25.0}, {wood, 75.0}}, BlendBasis::mass);
   EXPECT_TRUE(is_close(blend.hhv_J_per_kg(), 0.25 * oil.hhv_J_per_kg() + 0.75 * wood.hhv_J_per_kg(), 1e-12));
   EXPECT_TRUE(is_close(blend.lhv_J_per_kg(), 0.25 * oil.lhv_J_per_kg() + 0.75 * wood.lhv_J_per_kg(), 1e-12));
-  EXPECT_TRUE(is_close(blend.enthalpy_J_per_kg(330.0, db()),
-                       0.25 * oil.enthalpy_J_per_kg(330.0, db()) + 0.75 * wood.enthalpy_J_per_kg(330.0, db()), 1e-12));
+  EXPECT_TRUE(is_close(blend.enthalpy(units::kelvin(330.0), db()).value(),
+                       0.25 * oil.enthalpy(units::kelvin(330.0), db()).value() +
+                           0.75 * wood.enthalpy(units::kelvin(330.0), db()).value(),
+                       1e-12));
   EXPECT_TRUE(is_close(blend.moisture_mass_fraction(), 0.75 * 0.40, 1e-12));
 }
 
@@ -229,7 +232,8 @@ TEST(CondensedFuel, EnthalpyOfFormationReproducesTheHhv) {
   const double C = e[0], H = e[1], O = e[2], N = e[3], S = e[4];
   const double h_liquid_water = -285.830e3;  // NIST-JANAF 4th ed., H-063, Delta_f H H2O(l) at 298.15 K
   const double products = C * h298("CO2") + H / 2 * h_liquid_water + S * h298("SO2") + N / 2 * h298("N2");
-  const double released = fuel.enthalpy_J_per_kg(298.15, db()) + (C + H / 4 + S - O / 2) * h298("O2") - products;
+  const double released =
+      fuel.enthalpy(units::kelvin(298.15), db()).value() + (C + H / 4 + S - O / 2) * h298("O2") - products;
   // The data's H2O(g) differs from JANAF's by 1.4 J/mol, a relative 2e-6 of the HHV at most.
   EXPECT_TRUE(is_close(released, fuel.hhv_J_per_kg(), 1e-5));
 }
@@ -240,8 +244,11 @@ TEST(CondensedFuel, SensibleHeatUsesTheGivenSpecificHeatOnly) {
   const Fuel without = Fuel::condensed(spec, db());
   spec.specific_heat_J_per_kg_K = 1500.0;
   const Fuel with = Fuel::condensed(spec, db());
-  EXPECT_TRUE(is_close(with.enthalpy_J_per_kg(358.15, db()) - with.enthalpy_J_per_kg(298.15, db()), 1500.0 * 60.0, 1e-9));
-  EXPECT_TRUE(is_close(without.enthalpy_J_per_kg(358.15, db()), without.enthalpy_J_per_kg(298.15, db()), 1e-15));
+  EXPECT_TRUE(
+      is_close(with.enthalpy(units::kelvin(358.15), db()).value() - with.enthalpy(units::kelvin(298.15), db()).value(),
+               1500.0 * 60.0, 1e-9));
+  EXPECT_TRUE(is_close(without.enthalpy(units::kelvin(358.15), db()).value(),
+                       without.enthalpy(units::kelvin(298.15), db()).value(), 1e-15));
   EXPECT_FALSE(without.sensible_heat_known());
   EXPECT_TRUE(with.sensible_heat_known());
 }

@@ -32,24 +32,25 @@ TEST(SpeciesData, NamesAreCaseSensitiveAndTyposGetASuggestion) {
 
 // Wrong if evaluation silently extrapolated beyond the fitted range.
 TEST(Species, EvaluationOutsideTheRangeIsAnErrorNamingTheRange) {
-  EXPECT_THROW_WITH((void)db().at("CO2").cp_over_R(4000.0), units::InputError,
+  EXPECT_THROW_WITH((void)db().at("CO2").cp_over_R(units::kelvin(4000.0)), units::InputError,
                     "species CO2: temperature 4000 K is outside its data range 200-3500 K");
-  EXPECT_THROW_WITH((void)db().at("NO").h_over_RT(150.0), units::InputError, "outside its data range 200-6000 K");
+  EXPECT_THROW_WITH((void)db().at("NO").h_over_RT(units::kelvin(150.0)), units::InputError,
+                    "outside its data range 200-6000 K");
 }
 
 // Wrong if SO2-type records (fitted from 300 K) could not be used for ambient feeds at 298.15 K,
 // or if that allowance leaked to other temperatures below 300 K.
 TEST(Species, ThreeHundredKelvinRecordsAreEvaluableAtStandardTemperatureOnly) {
   const Species& so2 = db().at("SO2");
-  EXPECT_NO_THROW((void)so2.h_over_RT(units::kReferenceTemperature_K));
-  EXPECT_THROW((void)so2.h_over_RT(299.0), units::InputError);
-  EXPECT_THROW((void)so2.h_over_RT(250.0), units::InputError);
+  EXPECT_NO_THROW((void)so2.h_over_RT(units::kelvin(units::kReferenceTemperature_K)));
+  EXPECT_THROW((void)so2.h_over_RT(units::kelvin(299.0)), units::InputError);
+  EXPECT_THROW((void)so2.h_over_RT(units::kelvin(250.0)), units::InputError);
 }
 
 // Wrong if the two polynomial intervals were swapped or miscoded: both sides of T_mid must agree.
 TEST(Species, PolynomialsAreContinuousAtTheMidpoint) {
   for (const Species& species : db().all()) {
-    const double mid = species.range().mid_K;
+    const double mid = species.range().mid.value();
     EXPECT_TRUE(is_close(species.cp_over_R_unchecked(mid - 1e-9), species.cp_over_R_unchecked(mid + 1e-9), 2e-3, 2e-3))
         << species.formula();
     EXPECT_TRUE(is_close(species.h_over_RT_unchecked(mid - 1e-9), species.h_over_RT_unchecked(mid + 1e-9), 1e-3, 2e-3))

@@ -57,7 +57,7 @@ struct Reaction {
 // ln K from our species data at T.
 double our_ln_K(const Reaction& reaction, double T) {
   double ln_K = 0.0;
-  for (const Participant& p : reaction.species) ln_K -= p.nu * db().at(p.formula).g_over_RT(T);
+  for (const Participant& p : reaction.species) ln_K -= p.nu * db().at(p.formula).g_over_RT(units::kelvin(T));
   return ln_K;
 }
 
@@ -128,7 +128,7 @@ core::EquilibriumResult solve(const Reaction& reaction, double T, double P_Pa) {
     products.emplace_back(p.formula);
   }
   const core::ElementAmounts b = core::element_amounts(db(), feed);
-  return core::EquilibriumSolver(db(), b, products).solve_tp(b, T, P_Pa);
+  return core::EquilibriumSolver(db(), b, products).solve_tp(b, units::kelvin(T), units::pascals(P_Pa));
 }
 
 // NIST-JANAF 4th ed. log10 Kf at 1000 / 1500 / 2000 / 2500 / 3000 K, column "log Kf":

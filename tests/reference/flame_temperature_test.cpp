@@ -46,7 +46,7 @@ core::EquilibriumResult flame(const Fuel& fuel, double pressure_Pa, std::vector<
   const std::vector<core::SpeciesAmount> feed = stoichiometric_air_feed(fuel);
   const core::ElementAmounts b = core::element_amounts(db(), feed);
   const core::EquilibriumSolver solver(db(), b, std::move(products));
-  return solver.solve_hp(b, core::feed_enthalpy_J(db(), feed, kT0_K), pressure_Pa);
+  return solver.solve_hp(b, core::feed_enthalpy(db(), feed, units::kelvin(kT0_K)), units::pascals(pressure_Pa));
 }
 
 // Records the comparison for docs/validation.md and asserts it.

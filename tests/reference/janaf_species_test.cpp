@@ -120,10 +120,10 @@ constexpr const char* kEntropyCriterion = "0.3 J/(mol K) absolute (issue 2 crite
 constexpr const char* kEnthalpyChangeCriterion =
     "0.5 % relative (issue 2 criterion; applied from 500 K, below which H - H298 is ill-conditioned)";
 
-double cp_J_per_mol_K(const core::Species& s, double T) { return kR * s.cp_over_R(T); }
-double s_J_per_mol_K(const core::Species& s, double T) { return kR * s.s_over_R(T); }
-double h_J_per_mol(const core::Species& s, double T) { return kR * T * s.h_over_RT(T); }
-double g_J_per_mol(const core::Species& s, double T) { return kR * T * s.g_over_RT(T); }
+double cp_J_per_mol_K(const core::Species& s, double T) { return kR * s.cp_over_R(units::kelvin(T)); }
+double s_J_per_mol_K(const core::Species& s, double T) { return kR * s.s_over_R(units::kelvin(T)); }
+double h_J_per_mol(const core::Species& s, double T) { return kR * T * s.h_over_RT(units::kelvin(T)); }
+double g_J_per_mol(const core::Species& s, double T) { return kR * T * s.g_over_RT(units::kelvin(T)); }
 
 // Formation from the elements in their reference states (C graphite, H2, O2, N2 gas).
 const std::map<std::string, std::map<std::string, double>>& formation_reactions() {

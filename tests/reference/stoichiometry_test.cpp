@@ -115,8 +115,8 @@ TEST(Stoichiometry, SaturationTemperatureAtTwentyKilopascal) {
   // (from memory).
   record_published_check({"saturation temperature of water", "20 kPa", "60.06 degC",
                           "steam tables based on IAPWS-IF97 (from memory)", "0.02 K absolute (test states no reason)",
-                          *water_dew_point_K(20e3) - 273.15});
-  EXPECT_TRUE(is_close(*water_dew_point_K(20e3) - 273.15, 60.06, 0.0, 0.02));
+                          water_dew_point(units::pascals(20e3))->value() - 273.15});
+  EXPECT_TRUE(is_close(water_dew_point(units::pascals(20e3))->value() - 273.15, 60.06, 0.0, 0.02));
 }
 
 // Wrong if solving the excess air from a measured flue O2 did not reproduce the excess air behind it.
