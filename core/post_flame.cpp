@@ -54,10 +54,10 @@ PostFlameGas gas_from(const EquilibriumResult& equilibrium, const SpeciesIndices
 }
 
 void check_temperature(const EquilibriumSolver& solver, const std::string& field, double temperature_K) {
-  if (!(std::isfinite(temperature_K) && temperature_K >= solver.min_temperature_K() &&
-        temperature_K <= solver.max_temperature_K())) {
+  if (!(std::isfinite(temperature_K) && temperature_K >= solver.min_temperature().value() &&
+        temperature_K <= solver.max_temperature().value())) {
     throw units::InputError(fmt::format("{} = {:g} K: must lie within the species data range {:g}-{:g} K", field,
-                                        temperature_K, solver.min_temperature_K(), solver.max_temperature_K()));
+                                        temperature_K, solver.min_temperature().value(), solver.max_temperature().value()));
   }
 }
 
@@ -111,7 +111,7 @@ PostFlameHistory post_flame_history(const EquilibriumSolver& solver, const Eleme
   const double cooling_s = path.cooling_time.value();
 
   PostFlameHistory history;
-  EquilibriumResult previous = solver.solve_tp(b, firing_K, pressure_Pa);
+  EquilibriumResult previous = solver.solve_tp(b, units::kelvin(firing_K), units::pascals(pressure_Pa));
   const PostFlameGas firing = gas_from(previous, indices);
   history.nodes.push_back({0.0, firing});
   if (hold_s > 0.0) history.nodes.push_back({hold_s, firing});
@@ -122,7 +122,7 @@ PostFlameHistory post_flame_history(const EquilibriumSolver& solver, const Eleme
     for (int i = 1; i <= n; ++i) {
       const double fraction = static_cast<double>(i) / n;
       const double temperature_K = i == n ? final_K : firing_K + (final_K - firing_K) * fraction;
-      EquilibriumResult current = solver.solve_tp(b, temperature_K, pressure_Pa, &previous);
+      EquilibriumResult current = solver.solve_tp(b, units::kelvin(temperature_K), units::pascals(pressure_Pa), &previous);
       history.nodes.push_back({hold_s + cooling_s * fraction, gas_from(current, indices)});
       previous = std::move(current);
     }

@@ -195,16 +195,16 @@ ThermalNoResult thermal_no(const EquilibriumSolver& solver, const ElementAmounts
                            units::Pressure pressure, units::Time residence_time, const ThermalNoOptions& options) {
   const double T = temperature.value();
   const double P = pressure.value();
-  if (!(std::isfinite(T) && T >= solver.min_temperature_K() && T <= solver.max_temperature_K())) {
+  if (!(std::isfinite(T) && T >= solver.min_temperature().value() && T <= solver.max_temperature().value())) {
     throw units::InputError(fmt::format("{}.temperature = {:g} K: must lie within the species data range {:g}-{:g} K",
-                                        options.field, T, solver.min_temperature_K(), solver.max_temperature_K()));
+                                        options.field, T, solver.min_temperature().value(), solver.max_temperature().value()));
   }
   if (!(std::isfinite(P) && P > 0.0)) {
     throw units::InputError(fmt::format("{}.pressure = {:g} Pa: must be a finite pressure > 0 Pa", options.field, P));
   }
   check_residence_time(options, residence_time.value());
   check_initial_no(options);
-  return thermal_no(post_flame_gas(solver.solve_tp(b, T, P)), residence_time, options);
+  return thermal_no(post_flame_gas(solver.solve_tp(b, temperature, pressure)), residence_time, options);
 }
 
 ThermalNoPathResult thermal_no_along(const PostFlameHistory& history, const ThermalNoOptions& options) {

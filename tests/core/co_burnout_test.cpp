@@ -108,7 +108,7 @@ TEST(CoBurnout, EqualsTheStartingCoAtZeroCoolingTime) {
 TEST(CoBurnout, HoldAtFixedTemperatureIsTheExponentialDecayOfThePublishedRate) {
   const Fixture f;
   const double T = 1150.0;  // inside the range of both expressions' measurements
-  const PostFlameGas gas = post_flame_gas(f.solver.solve_tp(f.b, T, units::kStandardAtmosphere_Pa));
+  const PostFlameGas gas = post_flame_gas(f.solver.solve_tp(f.b, units::kelvin(T), units::pascals(units::kStandardAtmosphere_Pa)));
   const double c_per_cm3 = gas.concentration_mol_per_m3 * 1e-6;  // mol/cm^3
   const double R_cal = units::kGasConstant_J_per_mol_K / 4.184;
   // Dryer & Glassman (1973), from memory: 10^14.6 exp(-40000/RT) [H2O]^0.5 [O2]^0.25, mol/cm^3.

@@ -38,7 +38,7 @@ EquilibriumResult solve(const std::string& feed, double temperature_K, double pr
   const std::vector<SpeciesAmount> amounts = parse_reactants(feed, "feed", db());
   const ElementAmounts b = element_amounts(db(), amounts);
   const EquilibriumSolver solver(db(), b);
-  const EquilibriumResult r = solver.solve_tp(b, temperature_K, pressure_Pa);
+  const EquilibriumResult r = solver.solve_tp(b, units::kelvin(temperature_K), units::pascals(pressure_Pa));
   EXPECT_LT(worst_imbalance(b, r), 1e-9) << feed;
   return r;
 }

@@ -43,7 +43,7 @@ struct Fixture {
   ThermalNoResult at(double T_K, double t_s, const ThermalNoOptions& options = {}) const {
     return thermal_no(solver, b, units::kelvin(T_K), units::pascals(kAtm_Pa), units::seconds(t_s), options);
   }
-  PostFlameGas gas(double T_K, double P_Pa = kAtm_Pa) const { return post_flame_gas(solver.solve_tp(b, T_K, P_Pa)); }
+  PostFlameGas gas(double T_K, double P_Pa = kAtm_Pa) const { return post_flame_gas(solver.solve_tp(b, units::kelvin(T_K), units::pascals(P_Pa))); }
 };
 
 PostFlamePath cooling_path(double firing_K, double final_K, double hold_s, double cooling_s, int steps = 20) {

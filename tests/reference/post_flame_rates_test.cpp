@@ -124,7 +124,7 @@ TEST(ZeldovichRates, EquilibriumConstantAgreesWithOurSpeciesDataWithinTheKnownDa
   EXPECT_TRUE(is_close(formation_difference_J, 970.0, 0.0, 10.0));  // 0.97 kJ/mol, docs/equilibrium.md
   for (double T = 1800.0; T <= 2500.0; T += 100.0) {
     const double ln_k_ours =
-        -(2.0 * db().at("NO").g_over_RT(T) - db().at("N2").g_over_RT(T) - db().at("O2").g_over_RT(T));
+        -(2.0 * db().at("NO").g_over_RT(units::kelvin(T)) - db().at("N2").g_over_RT(units::kelvin(T)) - db().at("O2").g_over_RT(units::kelvin(T)));
     const double ours = std::exp(ln_k_ours);
     const double from_rates = rates.equilibrium_constant(units::kelvin(T));
     record_published_check(
