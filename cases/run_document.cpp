@@ -168,6 +168,15 @@ ReportTable post_flame_table(const RunResult& r) {
                           figure_cell(p.ceiling, true), num(e.mg_per_Nm3_at_reference.result.value())});
   }
   table.notes = post_flame_notes(r.post_flame);
+  for (const PollutantBound& p : r.emissions.pollutants) {
+    if (p.estimate && p.estimate->wet_mole_fraction > p.wet_mole_fraction) {
+      table.notes.push_back(fmt::format(
+          "{}: the estimate exceeds the equilibrium bound. NO from fuel nitrogen forms by kinetics in the flame and "
+          "is not held to the equilibrium at the firing temperature; state fuel.nitrogen_conversion from the "
+          "plant's data where it is known.",
+          p.name));
+    }
+  }
   return table;
 }
 

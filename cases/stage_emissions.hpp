@@ -1,5 +1,5 @@
 #pragma once
-// Stage 4 of a run, emissions: the equilibrium bound of each reported pollutant in the stack gas on
+// Stage 5 of a run, emissions: the equilibrium bound of each reported pollutant in the stack gas on
 // the report's bases: ppmvd, ppmvd and mg/Nm3 at the reference O2, kg/h, t/yr, and per heat input
 // (lb/MMBtu, g/GJ) by US EPA Method 19 and by mass balance.
 
