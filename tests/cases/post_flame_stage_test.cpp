@@ -3,15 +3,19 @@
 
 #include "stackbound/cases/stage_post_flame.hpp"
 
+#include <stdexcept>
 #include <string>
+#include <vector>
 
 #include <gtest/gtest.h>
+#include <nlohmann/json.hpp>
 
 #include "stackbound/cases/case_file.hpp"
 #include "stackbound/cases/pipeline.hpp"
 #include "stackbound/cases/species_file.hpp"
 #include "stackbound/cases/sweep.hpp"
 #include "stackbound/units/input_error.hpp"
+#include "tests/support/run_binary.hpp"
 #include "tests/support/tolerance.hpp"
 
 namespace stackbound::cases {
@@ -178,6 +182,34 @@ TEST(PostFlameStage, CaseFileFieldsAreReadAndChecked) {
     } catch (const units::InputError& error) {
       EXPECT_NE(std::string(error.what()).find(b.fragment), std::string::npos) << error.what();
     }
+  }
+}
+
+// Wrong if the run JSON lacked the documented post_flame keys, an estimate or ceiling had other keys
+// than the bound (docs/report-json.md), or printed other numbers than the library's run.
+TEST(PostFlameStage, RunJsonCarriesEstimateCeilingAndThePostFlameObject) {
+  const auto run = testing::run_stackbound({"run", example("oil_heater.yaml"), "--format", "json"});
+  ASSERT_EQ(run.exit_code, 0) << run.err;
+  const nlohmann::json json = nlohmann::json::parse(run.out);
+  const nlohmann::json& post = json.at("post_flame");
+  for (const char* key : {"residence_time_s", "residence_time_stated", "firing_temperature_K", "pressure_Pa", "cooling",
+                          "rate_sources", "thermal_no", "co_burnout", "fuel_nitrogen", "no_split",
+                          "highest_equilibrium_wet_mole_fraction", "assumptions", "prompt_no"}) {
+    EXPECT_TRUE(post.contains(key)) << key;
+  }
+  EXPECT_EQ(post.at("prompt_no").get<std::string>(), "not computed");
+  const RunResult library = run_case(load_case(example("oil_heater.yaml")), builtin_species());
+  for (const char* name : {"CO", "NO", "NOx"}) {
+    const nlohmann::json& bound = json.at("emissions").at(name);
+    for (const char* kind : {"estimate", "ceiling"}) {
+      const nlohmann::json& figure = bound.at(kind);
+      ASSERT_TRUE(figure.is_object()) << name << " " << kind;
+      EXPECT_EQ(figure.size() + 2, bound.size()) << name << " " << kind;
+      for (const auto& item : figure.items()) EXPECT_TRUE(bound.contains(item.key())) << item.key();
+    }
+    EXPECT_TRUE(is_close(bound.at("estimate").at("ppmvd_at_ref_o2").get<double>(),
+                         pollutant(library, name).estimate->emission.ppmvd_at_reference.value(), 1e-12, 1e-300))
+        << name;
   }
 }
 
