@@ -12,6 +12,7 @@
 
 #include "stackbound/cases/case_file.hpp"
 #include "stackbound/cases/pipeline.hpp"
+#include "stackbound/cases/source_map.hpp"
 #include "stackbound/cases/species_file.hpp"
 #include "stackbound/cases/sweep.hpp"
 #include "stackbound/units/input_error.hpp"
@@ -210,6 +211,22 @@ TEST(PostFlameStage, RunJsonCarriesEstimateCeilingAndThePostFlameObject) {
     EXPECT_TRUE(is_close(bound.at("estimate").at("ppmvd_at_ref_o2").get<double>(),
                          pollutant(library, name).estimate->emission.ppmvd_at_reference.value(), 1e-12, 1e-300))
         << name;
+  }
+}
+
+// Wrong if a cooling target outside the species data ran, or its message did not name the field at
+// its position in the file.
+TEST(PostFlameStage, CoolingTargetOutsideTheDataIsRefusedAtItsPosition) {
+  const std::string text =
+      "case: {title: t}\nfuel: {preset: natural_gas, feed_rate: 1 MW}\noperating_point: {excess_air: 15 %}\n"
+      "firing: {temperature: 1800 K}\npost_flame: {cooling_to: 50 K}\nreport: {reference_o2: 3 %}\n";
+  const LoadedCase loaded = parse_case_file(text, "t.yaml");
+  try {
+    (void)with_positions(loaded.sources, [&] { return run_case(loaded.definition, builtin_species()); });
+    ADD_FAILURE() << "a cooling target of 50 K was accepted";
+  } catch (const units::InputError& error) {
+    EXPECT_NE(std::string(error.what()).find("t.yaml:5:"), std::string::npos) << error.what();
+    EXPECT_NE(std::string(error.what()).find("50 K"), std::string::npos) << error.what();
   }
 }
 
