@@ -144,6 +144,7 @@ std::vector<std::string> post_flame_notes(const PostFlame& p) {
                     fmt::format("{}.", fmt::join(p.assumptions, "; ")));
   }
   notes.push_back("Prompt NO is not computed.");
+  notes.push_back(std::string(kPostFlameCaution));
   return notes;
 }
 

@@ -30,6 +30,13 @@
 
 namespace stackbound::cases {
 
+// Printed with every estimate: what it leaves out and why it may lie far below a measurement.
+inline constexpr std::string_view kPostFlameCaution =
+    "The estimate is not conservative: it follows the gas at the stated (or adiabatic overall-mixture) firing "
+    "temperature with equilibrium radicals, while real flames form NO faster at their peak temperatures, with "
+    "superequilibrium O and OH and by prompt NO (not computed). It can lie far below measured NOx; use it to see "
+    "how far the bound is from kinetics, not in place of the bound or a measurement.";
+
 // Where the fuel-N conversion of the estimate comes from.
 enum class ConversionOrigin {
   stated,         // fuel.nitrogen_conversion

@@ -116,6 +116,7 @@ nlohmann::json post_flame_json(const RunResult& r) {
        {{"NO", p.highest_equilibrium_no}, {"NOx", p.highest_equilibrium_nox}, {"CO", p.highest_equilibrium_co}}},
       {"assumptions", p.assumptions},
       {"prompt_no", "not computed"},
+      {"caution", kPostFlameCaution},
   };
 }
 
