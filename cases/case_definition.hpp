@@ -52,6 +52,9 @@ struct FuelFeedSpec {
   FuelSpec fuel;
   units::ParsedQuantity feed_rate;             // mass flow, molar flow (normal volume) or power
   double temperature_K = 298.15;
+  // Fraction of the fuel-bound nitrogen leaving as NO (core/fuel_nitrogen.hpp), 0 ... 1; nullopt: the
+  // typical band of the fuel's class (post-flame stage).
+  std::optional<double> nitrogen_conversion;
 };
 
 struct AirSpec {
@@ -80,6 +83,18 @@ struct FiringSpec {
   double heat_loss_fraction = 0.0;             // when adiabatic: fraction of the heat input lost
   double pressure_Pa = 101325.0;
   std::vector<std::string> species;            // product candidates; empty = all that fit
+  // Time at the firing temperature (the post-flame hold), s. Default 20 ms, an assumption the report
+  // states (kDefaultResidenceTime_s).
+  double residence_time_s = 0.020;
+  bool residence_time_stated = false;
+};
+
+// The post-flame path after the hold: linear cooling to `cooling_to` over `cooling_time`
+// (core/post_flame.hpp). Unstated values are defaults the report states as assumptions.
+struct PostFlameSpec {
+  std::optional<double> cooling_to_K;          // nullopt: the stack temperature (stated or its default)
+  double cooling_time_s = 1.0;
+  bool cooling_time_stated = false;
 };
 
 // A measured concentration as stated ("3.2 %, dry", "18 ppm, dry"), on its stated basis.
@@ -103,6 +118,7 @@ struct MeasuredSpec {
 
 struct StackSpec {
   double temperature_K = 423.15;
+  bool temperature_stated = false;             // false: the default above (150 degC)
   double pressure_Pa = 101325.0;
   MeasuredSpec measured;
 };
@@ -136,6 +152,7 @@ struct CaseDefinition {
   AirSpec air;
   OperatingSpec operating;
   FiringSpec firing;
+  PostFlameSpec post_flame;
   StackSpec stack;
   ReportSpec report;
 };

@@ -31,7 +31,8 @@ namespace {
 
 using units::Dimension;
 
-constexpr std::array<std::string_view, 7> kSections{"case", "fuel", "air", "operating_point", "firing", "stack", "report"};
+constexpr std::array<std::string_view, 8> kSections{"case",   "fuel",       "air",   "operating_point",
+                                                   "firing", "post_flame", "stack", "report"};
 
 double fraction_in(const YamlField& field, double low, double high, const char* rule) {
   const double fraction = field.quantity_si(Dimension::fraction);
@@ -42,6 +43,13 @@ double fraction_in(const YamlField& field, double low, double high, const char* 
 double temperature_K(const YamlField& field) { return field.quantity_si(Dimension::temperature); }
 double pressure_Pa(const YamlField& field, const PlausibleRange& range) {
   const double value = field.quantity_si(Dimension::pressure);
+  if (const auto problem = outside(value, range)) field.fail(*problem);
+  return value;
+}
+
+double time_s(const YamlField& field, const PlausibleRange& range) {
+  const double value = field.quantity_si(Dimension::time);
+  if (!std::isfinite(value) || value < 0.0) field.fail("must be a finite time >= 0 s");
   if (const auto problem = outside(value, range)) field.fail(*problem);
   return value;
 }
@@ -77,6 +85,9 @@ FuelFeedSpec fuel_feed(const YamlField& fuel) {
   if (feed.feed_rate.value_si <= 0.0) rate.fail("must be > 0");
   if (const auto problem = outside(feed.feed_rate.value_si, feed_range(feed.feed_rate.dimension))) rate.fail(*problem);
   if (const auto t = fuel.optional("temperature")) feed.temperature_K = temperature_K(*t);
+  if (const auto f = fuel.optional("nitrogen_conversion")) {
+    feed.nitrogen_conversion = fraction_in(*f, 0.0, 1.0, "must be between 0 % and 100 % of the fuel-bound nitrogen");
+  }
   return feed;
 }
 
@@ -135,7 +146,7 @@ OperatingSpec operating_spec(const YamlField& op) {
 }
 
 FiringSpec firing_spec(const YamlField& firing) {
-  firing.allow_only({"temperature", "adiabatic", "heat_loss", "pressure", "species"});
+  firing.allow_only({"temperature", "adiabatic", "heat_loss", "pressure", "species", "residence_time"});
   FiringSpec spec;
   if (const auto adiabatic = firing.optional("adiabatic")) spec.adiabatic = adiabatic->boolean();
   if (spec.adiabatic) {
@@ -149,6 +160,22 @@ FiringSpec firing_spec(const YamlField& firing) {
   }
   if (const auto p = firing.optional("pressure")) spec.pressure_Pa = pressure_Pa(*p, kFiringPressure);
   if (const auto species = firing.optional("species")) spec.species = string_list(*species);
+  if (const auto time = firing.optional("residence_time")) {
+    spec.residence_time_s = time_s(*time, kResidenceTime);
+    spec.residence_time_stated = true;
+  }
+  return spec;
+}
+
+PostFlameSpec post_flame_spec(const std::optional<YamlField>& post_flame) {
+  PostFlameSpec spec;
+  if (!post_flame) return spec;
+  post_flame->allow_only({"cooling_to", "cooling_time"});
+  if (const auto t = post_flame->optional("cooling_to")) spec.cooling_to_K = temperature_K(*t);
+  if (const auto time = post_flame->optional("cooling_time")) {
+    spec.cooling_time_s = time_s(*time, kCoolingTime);
+    spec.cooling_time_stated = true;
+  }
   return spec;
 }
 
@@ -177,7 +204,10 @@ StackSpec stack_spec(const std::optional<YamlField>& stack, const units::NormalC
   StackSpec spec;
   if (!stack) return spec;
   stack->allow_only({"temperature", "pressure", "measured"});
-  if (const auto t = stack->optional("temperature")) spec.temperature_K = temperature_K(*t);
+  if (const auto t = stack->optional("temperature")) {
+    spec.temperature_K = temperature_K(*t);
+    spec.temperature_stated = true;
+  }
   if (const auto p = stack->optional("pressure")) spec.pressure_Pa = pressure_Pa(*p, kStackPressure);
   if (const auto measured = stack->optional("measured")) spec.measured = measured_spec(*measured, normal);
   return spec;
@@ -268,7 +298,7 @@ void check_reference_o2(const CaseDefinition& definition, const std::optional<Ya
 LoadedCase parse_case_file(std::string_view text, const std::string& origin) {
   LoadedCase loaded{CaseDefinition{}, SourceMap(origin)};
   const YamlField root = YamlField::load(text, origin, &loaded.sources);
-  root.allow_only({"case", "fuel", "air", "operating_point", "firing", "stack", "report"});
+  root.allow_only({"case", "fuel", "air", "operating_point", "firing", "post_flame", "stack", "report"});
   CaseDefinition& definition = loaded.definition;
   definition.origin = origin;
   const YamlField info = root.required("case");
@@ -284,6 +314,7 @@ LoadedCase parse_case_file(std::string_view text, const std::string& origin) {
   definition.air = air_spec(root.optional("air"));
   definition.operating = operating_spec(root.required("operating_point"));
   definition.firing = firing_spec(root.required("firing"));
+  definition.post_flame = post_flame_spec(root.optional("post_flame"));
   const std::optional<YamlField> report = root.optional("report");
   definition.stack = stack_spec(root.optional("stack"), normal_conditions(report));
   if (report) definition.report = report_spec(*report);

@@ -157,7 +157,7 @@ FuelSpec read_fuel_spec(const YamlField& fuel, bool blend_part) {
   } else {
     fuel.allow_only({"name", "preset", "gas", "gas_basis", "ultimate", "ultimate_basis", "state", "heating_value",
                      "heating_value_basis", "heating_value_correlation", "specific_heat", "blend", "blend_by",
-                     "feed_rate", "temperature"});
+                     "feed_rate", "temperature", "nitrogen_conversion"});
   }
   FuelSpec spec;
   spec.field = fuel.path();

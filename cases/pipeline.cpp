@@ -11,6 +11,7 @@ StagesRun stages_to_run(const RunOptions& options) {
   return {
       .resolve = runs(Stage::resolve),
       .fire = runs(Stage::fire),
+      .post_flame = runs(Stage::post_flame),
       .stack = runs(Stage::stack),
       .emissions = runs(Stage::emissions),
       .screening = options.full_report,
@@ -30,20 +31,22 @@ RunResult run_case(CaseDefinition definition, const core::SpeciesDatabase& datab
   FiringState fired = run.fire
                           ? fire_stage(definition.firing, resolved, database, previous ? &previous->fired : nullptr)
                           : previous->fired;
-  // Post-flame stage (not yet): it will take `fired` to the gas entering the stack; today the fire
-  // result passes straight on.
+  // The post-flame kinetics: estimate and ceiling beside the bound; the stack gas stays the frozen
+  // firing-state equilibrium.
+  PostFlame post_flame = run.post_flame ? post_flame_stage(definition, resolved, fired) : previous->post_flame;
   StackGas stack =
       run.stack ? stack_stage(definition.stack, definition.report.o2_basis, resolved, fired, options.record_factors)
                 : previous->stack;
   const EmissionOptions emission_options{.record_factors = options.record_factors,
                                          .describe_reference_o2 = options.full_report};
   EmissionFigures figures =
-      run.emissions ? emissions_stage(definition, resolved, fired, stack, emission_options) : previous->emissions;
+      run.emissions ? emissions_stage(definition, resolved, fired, stack, emission_options, &post_flame) : previous->emissions;
   Screening screening =
       run.screening ? screening_stage({definition, resolved, fired, stack, figures}, database) : Screening{};
   return {std::move(definition),
           std::move(resolved),
           std::move(fired),
+          std::move(post_flame),
           std::move(stack),
           std::move(figures),
           std::move(screening),

@@ -34,6 +34,10 @@ inline constexpr PlausibleRange kFuelMassFeed{1e-7, 1e4, "kg/s", 1.0, "a fuel fe
 inline constexpr PlausibleRange kFuelMolarFeed{1e-7, 3.6e6, "mol/s", 1.0, "a fuel feed"};
 // Heat input from 1 W to 20 GW (the largest boilers are about 5 GW of fuel).
 inline constexpr PlausibleRange kHeatInput{1.0, 2e10, "MW", 1e6, "a heat input"};
+// Post-flame times: a residence time at the firing temperature from 0 to 10 s, a cooling from 0 to
+// 1 h (furnaces hold the gas for seconds; a longer time is a mistake in the unit).
+inline constexpr PlausibleRange kResidenceTime{0.0, 10.0, "s", 1.0, "a residence time at the firing temperature"};
+inline constexpr PlausibleRange kCoolingTime{0.0, 3600.0, "s", 1.0, "a post-flame cooling time"};
 
 // The range of a fuel feed stated as a mass flow, a molar flow or a heat input.
 inline const PlausibleRange& feed_range(units::Dimension dimension) {

@@ -108,6 +108,79 @@ ReportTable bounds_table(const RunResult& r) {
   return bounds;
 }
 
+std::string figure_cell(const std::optional<PollutantFigure>& figure, bool mass) {
+  if (!figure) return "-";
+  const em::StackEmission& e = figure->emission;
+  return num(mass ? e.mg_per_Nm3_at_reference.result.value() : e.ppmvd_at_reference.value());
+}
+
+std::vector<std::string> post_flame_notes(const PostFlame& p) {
+  std::vector<std::string> notes;
+  notes.push_back(fmt::format(
+      "Path: {:g} ms at {:.1f} K, then linear cooling to {:.1f} K ({}) over {:g} s, at {:.4g} kPa. Estimate: "
+      "kinetics along that path; ceiling: the larger of the highest equilibrium value along the path and the "
+      "kinetic NO with all fuel nitrogen as NO; bound: the frozen equilibrium at the firing temperature (as above).",
+      p.path.hold_time.value() * 1e3, p.path.firing_temperature.value(), p.path.final_temperature.value(),
+      p.cooling_to_origin, p.path.cooling_time.value(), p.path.pressure.value() / 1e3));
+  if (p.thermal_no) {
+    notes.push_back(fmt::format("NO split (wet): thermal {} ppmv, fuel nitrogen {} ppmv ({}, conversion {:g} %). "
+                                "Thermal NO: extended Zeldovich with equilibrium O and OH; rate constants {}{}.",
+                                num(p.thermal_no->no_mole_fraction * 1e6),
+                                num(p.fuel_nitrogen.estimate_wet_mole_fraction * 1e6), to_string(p.fuel_nitrogen.origin),
+                                p.fuel_nitrogen.no.conversion_fraction * 100.0, p.thermal_no->rate_constants,
+                                p.thermal_no->rate_constants_within_stated_range
+                                    ? ""
+                                    : " (extrapolated outside their stated temperature range)"));
+  } else {
+    notes.push_back("Thermal NO not computed: the products lack O, O2, N2 or NO (firing.species).");
+  }
+  if (p.co) {
+    notes.push_back(fmt::format("CO burnout from the equilibrium CO at the firing temperature: {}{}.",
+                                p.co->rate_expression,
+                                p.co->within_measured_range ? "" : " (used outside the temperatures it was measured at)"));
+  }
+  if (!p.assumptions.empty()) {
+    notes.push_back("Assumptions (defaults the user should replace with the plant's): " +
+                    fmt::format("{}.", fmt::join(p.assumptions, "; ")));
+  }
+  notes.push_back("Prompt NO is not computed.");
+  notes.push_back(std::string(kPostFlameCaution));
+  return notes;
+}
+
+// Estimate, ceiling and bound side by side for the pollutants the post-flame stage covers.
+ReportTable post_flame_table(const RunResult& r) {
+  ReportTable table;
+  table.title = "Post-flame kinetics: estimate and ceiling beside the equilibrium bound";
+  const std::string ref = ref_label(r);
+  table.columns = {"pollutant",
+                   fmt::format("estimate [ppmvd {}]", ref),
+                   fmt::format("ceiling [ppmvd {}]", ref),
+                   fmt::format("bound [ppmvd {}]", ref),
+                   fmt::format("estimate [mg/Nm3 {}]", ref),
+                   fmt::format("ceiling [mg/Nm3 {}]", ref),
+                   fmt::format("bound [mg/Nm3 {}]", ref)};
+  for (const PollutantBound& p : r.emissions.pollutants) {
+    if (!p.estimate && !p.ceiling) continue;
+    const em::StackEmission& e = p.emission;
+    table.rows.push_back({p.name + (e.ppmvd.pollutant().expressed_as_no2 ? " (as NO2)" : ""),
+                          figure_cell(p.estimate, false), figure_cell(p.ceiling, false),
+                          num(e.ppmvd_at_reference.value()), figure_cell(p.estimate, true),
+                          figure_cell(p.ceiling, true), num(e.mg_per_Nm3_at_reference.result.value())});
+  }
+  table.notes = post_flame_notes(r.post_flame);
+  for (const PollutantBound& p : r.emissions.pollutants) {
+    if (p.estimate && p.estimate->wet_mole_fraction > p.wet_mole_fraction) {
+      table.notes.push_back(fmt::format(
+          "{}: the estimate exceeds the equilibrium bound. NO from fuel nitrogen forms by kinetics in the flame and "
+          "is not held to the equilibrium at the firing temperature; state fuel.nitrogen_conversion from the "
+          "plant's data where it is known.",
+          p.name));
+    }
+  }
+  return table;
+}
+
 ReportTable limits_table(const Screening& s) {
   ReportTable limits;
   limits.title = "Screening against the stated limits";
@@ -191,6 +264,7 @@ Report run_document(const RunResult& r) {
       kBoundStatement, r.definition.description.empty() ? "" : " " + r.definition.description);
   report.summary = summary(r);
   report.tables.push_back(bounds_table(r));
+  report.tables.push_back(post_flame_table(r));
   if (!r.screening.limits.empty()) report.tables.push_back(limits_table(r.screening));
   if (!r.screening.measured.empty()) report.tables.push_back(measured_table(r.screening));
   report.tables.push_back(flue_table(r));

@@ -34,13 +34,16 @@ ReferenceO2 reference_o2(const CaseDefinition& definition, bool describe) {
           false};
 }
 
-PollutantBound bound_of(const em::Pollutant& pollutant, const CaseDefinition& definition, const ResolvedCase& resolved,
-                        const FiringState& fired, const StackGas& stack, double reference_o2, bool record_factors) {
+// The figures of a pollutant at the wet mole fraction `wet_fraction` of the stack gas: the one
+// conversion path of the bound, the estimate and the ceiling.
+em::StackEmission emission_at(const em::Pollutant& pollutant, double wet_fraction, const CaseDefinition& definition,
+                              const ResolvedCase& resolved, const StackGas& stack, double reference_o2,
+                              bool record_factors) {
   const em::O2Basis o2_basis = definition.report.o2_basis;
   const em::FFactor fd = em::FFactor::from_scm_per_J(em::FFactorKind::dry, resolved.combustion.f_factors.fd_m3_per_J);
   const em::StackEmissionInput input{
       .pollutant = pollutant,
-      .pollutant_wet_fraction = wet_fraction_of(fired.equilibrium, pollutant.name),
+      .pollutant_wet_fraction = wet_fraction,
       .h2o_wet_fraction = stack.h2o_wet,
       .o2_wet_fraction = stack.o2_wet,
       .co2_wet_fraction = stack.co2_wet,
@@ -61,7 +64,23 @@ PollutantBound bound_of(const em::Pollutant& pollutant, const CaseDefinition& de
     method19_context.record_factors = record_factors;
     emission.method19 = em::method19_o2_dry(emission.ppmvd, fd, method19_context);
   }
-  return {pollutant.name, input.pollutant_wet_fraction, std::move(emission)};
+  return emission;
+}
+
+PollutantBound bound_of(const em::Pollutant& pollutant, const CaseDefinition& definition, const ResolvedCase& resolved,
+                        const FiringState& fired, const StackGas& stack, double reference_o2, bool record_factors) {
+  const double wet_fraction = wet_fraction_of(fired.equilibrium, pollutant.name);
+  return {pollutant.name, wet_fraction,
+          emission_at(pollutant, wet_fraction, definition, resolved, stack, reference_o2, record_factors), std::nullopt,
+          std::nullopt};
+}
+
+std::optional<PollutantFigure> figure_at(const std::optional<double>& wet_fraction, const em::Pollutant& pollutant,
+                                         const CaseDefinition& definition, const ResolvedCase& resolved,
+                                         const StackGas& stack, double reference_o2, bool record_factors) {
+  if (!wet_fraction) return std::nullopt;
+  return PollutantFigure{*wet_fraction, emission_at(pollutant, *wet_fraction, definition, resolved, stack,
+                                                    reference_o2, record_factors)};
 }
 
 }  // namespace
@@ -72,7 +91,8 @@ double wet_fraction_of(const core::EquilibriumResult& equilibrium, std::string_v
 }
 
 EmissionFigures emissions_stage(const CaseDefinition& definition, const ResolvedCase& resolved,
-                                const FiringState& fired, const StackGas& stack, const EmissionOptions& options) {
+                                const FiringState& fired, const StackGas& stack, const EmissionOptions& options,
+                                const PostFlame* post_flame) {
   ReferenceO2 reference = reference_o2(definition, options.describe_reference_o2);
   EmissionFigures figures{
       .normal = definition.report.normal,
@@ -84,8 +104,15 @@ EmissionFigures emissions_stage(const CaseDefinition& definition, const Resolved
   };
   figures.pollutants.reserve(definition.report.pollutants.size());
   for (const em::Pollutant& pollutant : definition.report.pollutants) {
-    figures.pollutants.push_back(
-        bound_of(pollutant, definition, resolved, fired, stack, reference.o2_dry, options.record_factors));
+    PollutantBound bound =
+        bound_of(pollutant, definition, resolved, fired, stack, reference.o2_dry, options.record_factors);
+    if (post_flame != nullptr) {
+      bound.estimate = figure_at(post_flame->estimate_wet_fraction(pollutant.name), pollutant, definition, resolved,
+                                 stack, reference.o2_dry, options.record_factors);
+      bound.ceiling = figure_at(post_flame->ceiling_wet_fraction(pollutant.name), pollutant, definition, resolved,
+                                stack, reference.o2_dry, options.record_factors);
+    }
+    figures.pollutants.push_back(std::move(bound));
   }
   return figures;
 }

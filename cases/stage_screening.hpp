@@ -1,5 +1,5 @@
 #pragma once
-// Stage 5 of a run, screening: everything after the emission figures. The bounds against the stated
+// Stage 6 of a run, screening: everything after the emission figures. The bounds against the stated
 // limits, the measured values beside the model on a common basis, the findings a reader must look at
 // (where they disagree, and what the model itself shows: soot, rich firing, a stack near the dew
 // point), and the assumptions and cautions every report carries.

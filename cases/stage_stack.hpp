@@ -1,7 +1,7 @@
 #pragma once
-// Stage 3 of a run, stack: the gas that reaches the stack. Today the firing-state equilibrium gas
-// phase frozen unchanged (a post-flame stage, run between fire and stack, will change what arrives
-// here); its moisture, O2 and CO2 on wet and dry bases, and its flows at the feed rate.
+// Stage 4 of a run, stack: the gas that reaches the stack. The firing-state equilibrium gas phase
+// frozen unchanged (the post-flame stage gives its estimates beside the bound and does not change this
+// gas); its moisture, O2 and CO2 on wet and dry bases, and its flows at the feed rate.
 
 #include "stackbound/cases/case_definition.hpp"
 #include "stackbound/cases/stage_fire.hpp"

@@ -40,6 +40,10 @@ Dimension dimension_of(SweepParameter parameter) {
 
 std::span<const std::string_view> sweep_parameter_names() { return kNames; }
 
+// The post-flame stage reads the firing state (temperature, pressure, equilibrium solver), the fuel's
+// nitrogen, firing.residence_time, post_flame and the stack temperature: every parameter that reaches
+// it reaches an earlier stage first, so none starts there. A step of reference_o2 keeps it (and its
+// path equilibria); a step of firing_temperature, heat_loss or pressure reruns it with the fire stage.
 Stage first_stage_reading(SweepParameter parameter) {
   switch (parameter) {
     case SweepParameter::excess_air:

@@ -7,7 +7,9 @@
 #include <algorithm>
 #include <memory>
 #include <nlohmann/json.hpp>
+#include <cmath>
 #include <numeric>
+#include <optional>
 
 #include "stackbound/render/finite_figures.hpp"
 #include "stackbound/cli/commands.hpp"
@@ -16,6 +18,8 @@
 #include "stackbound/core/composition_notation.hpp"
 #include "stackbound/core/element_amounts.hpp"
 #include "stackbound/core/equilibrium.hpp"
+#include "stackbound/core/post_flame.hpp"
+#include "stackbound/core/thermal_no.hpp"
 #include "stackbound/units/constants.hpp"
 #include "stackbound/units/input_error.hpp"
 #include "stackbound/units/quantity_parser.hpp"
@@ -28,6 +32,11 @@ namespace {
 
 constexpr std::string_view kBoundNote =
     "Chemical-equilibrium values at the stated T and P: an equilibrium bound, not a measurement.";
+constexpr std::string_view kThermalNoCaution =
+    "Thermal NO is a kinetic estimate with equilibrium O and OH (extended Zeldovich); prompt NO is not computed.";
+// Longest --residence-time accepted: far beyond any furnace, so a larger value is taken as a mistake
+// in the unit. Our choice, no source.
+constexpr double kMaximumResidenceTime_s = 3600.0;
 // Text output lists species down to this gas mole fraction unless --all is given.
 constexpr double kDefaultListedFraction = 1e-12;
 
@@ -41,8 +50,48 @@ struct EquilibriumOptions {
   std::string species;
   std::string format;
   std::string output;
+  std::string residence_time;
   bool all = false;
 };
+
+// --residence-time parsed and checked at the edge: a finite time, 0 s ... 1 h.
+std::optional<units::Time> residence_time_option(const std::string& text) {
+  if (text.empty()) return std::nullopt;
+  const units::Time time = units::parse_time(text, "--residence-time");
+  const double seconds = time.value();
+  if (!(std::isfinite(seconds) && seconds >= 0.0 && seconds <= kMaximumResidenceTime_s)) {
+    throw units::InputError(fmt::format("--residence-time = \"{}\" ({:g} s): must be a finite time from 0 s to {:g} s (1 h)",
+                                        text, seconds, kMaximumResidenceTime_s));
+  }
+  return time;
+}
+
+std::string thermal_no_text(const core::ThermalNoResult& no) {
+  std::string text = fmt::format("\nThermal NO after a residence time of {:g} s at {:.2f} K:\n", no.residence_time_s,
+                                 no.temperature_K);
+  text += fmt::format("  NO mole fraction             {:.6e} ({:.4g} ppmv)\n", no.no_mole_fraction,
+                      no.no_mole_fraction * 1e6);
+  text += fmt::format("  equilibrium NO mole fraction {:.6e} ({:.4g} ppmv)\n", no.no_equilibrium_mole_fraction,
+                      no.no_equilibrium_mole_fraction * 1e6);
+  text += fmt::format("  initial rate                 {:.6e} 1/s (mole fraction per second)\n",
+                      no.initial_rate_mole_fraction_per_s);
+  text += fmt::format("  rate constants               {}{}\n", no.rate_constants,
+                      no.rate_constants_within_stated_range ? "" : " (extrapolated outside their stated range)");
+  text += fmt::format("{}\n", kThermalNoCaution);
+  return text;
+}
+
+nlohmann::json thermal_no_json(const core::ThermalNoResult& no) {
+  return {{"residence_time_s", no.residence_time_s},
+          {"no_mole_fraction", no.no_mole_fraction},
+          {"no_equilibrium_mole_fraction", no.no_equilibrium_mole_fraction},
+          {"initial_rate_mole_fraction_per_s", no.initial_rate_mole_fraction_per_s},
+          {"rate_constants", no.rate_constants},
+          {"temperature_K", no.temperature_K},
+          {"pressure_Pa", no.pressure_Pa},
+          {"rate_constants_within_stated_range", no.rate_constants_within_stated_range},
+          {"note", kThermalNoCaution}};
+}
 
 // Solver messages name their fields plainly ("species = ..."); on the command line they are options.
 [[noreturn]] void rethrow_as_option(const units::InputError& error) {
@@ -167,6 +216,7 @@ void run(const EquilibriumOptions& options, const GlobalOptions& global) {
   if (!options.adiabatic && !options.heat_loss.empty()) {
     throw units::InputError(fmt::format("--heat-loss = \"{}\": applies only with --adiabatic", options.heat_loss));
   }
+  const std::optional<units::Time> residence_time = residence_time_option(options.residence_time);
   std::vector<std::string> candidates;
   if (!options.species.empty()) {
     candidates = split_list(options.species, "--species");
@@ -199,9 +249,24 @@ void run(const EquilibriumOptions& options, const GlobalOptions& global) {
   } catch (const units::InputError& error) {
     rethrow_as_option(error);
   }
-  const std::string content = options.format == "json"
-                                  ? render::json_text(json_report(result, feed, options, feed_temperature_K))
-                                  : text_report(database, result, feed, options, feed_temperature_K);
+  // Thermal NO at the solved state: the fixed T, or with --adiabatic the adiabatic flame temperature.
+  std::optional<core::ThermalNoResult> no;
+  if (residence_time) {
+    try {
+      no = core::thermal_no(core::post_flame_gas(result), *residence_time, {.field = "--residence-time"});
+    } catch (const units::InputError& error) {
+      throw units::InputError(fmt::format("--residence-time = \"{}\": {}", options.residence_time, error.what()));
+    }
+  }
+  std::string content;
+  if (options.format == "json") {
+    nlohmann::json json = json_report(result, feed, options, feed_temperature_K);
+    if (no) json["thermal_no"] = thermal_no_json(*no);
+    content = render::json_text(json);
+  } else {
+    content = text_report(database, result, feed, options, feed_temperature_K);
+    if (no) content += thermal_no_text(*no);
+  }
   write_output(options.output, content);
 }
 
@@ -217,12 +282,16 @@ void add_equilibrium_command(CLI::App& app, const GlobalOptions& global) {
       "  stackbound equilibrium --feed \"CH4 + 2 O2 + 7.52 N2\" --adiabatic --format json\n"
       "  stackbound equilibrium --feed \"H2 + 0.5 O2 + 1.88 N2\" --adiabatic --feed-temperature 600K --pressure 10bar\n"
       "  stackbound equilibrium --feed \"CO2\" --temperature 3000K --species CO2,CO,O2\n"
+      "  stackbound equilibrium --feed \"CH4 + 2.4 O2 + 9.03 N2\" --temperature 1900K --residence-time 20ms --format json\n"
       "The feed is written as reactants: terms joined by \"+\", each an optional coefficient in mol (a plain\n"
       "decimal number such as 2.4, .5 or 1e-3; 1 when left out) and a blank before the formula (\"2 O2\", not\n"
       "\"2O2\"); each species once. Formulas are database species (see `stackbound species`), case-sensitive\n"
       "(CO2, NO, Ar, C(gr)); notation: docs/composition-notation.md.\n"
       "Products: every species made of the feed's elements unless --species restricts them.\n"
-      "Results are equilibrium bounds at the stated conditions, not measurements.");
+      "Results are equilibrium bounds at the stated conditions, not measurements.\n"
+      "--residence-time adds thermal NO (extended Zeldovich, equilibrium O and OH, no NO at the start) after\n"
+      "that time at the solved state: the fixed --temperature, or with --adiabatic the adiabatic flame\n"
+      "temperature. It is a kinetic estimate; prompt NO is not computed.");
   command
       ->add_option("--feed", options->feed, "Reactants in mol, terms joined by \"+\", e.g. \"CH4 + 2 O2 + 7.52 N2\"")
       ->required();
@@ -237,6 +306,8 @@ void add_equilibrium_command(CLI::App& app, const GlobalOptions& global) {
   command->add_option("--pressure", options->pressure, "Absolute pressure with unit (default 1 atm), e.g. 1atm, 5bar");
   command->add_option("--species", options->species,
                       "Restrict the products to this comma-separated list, e.g. CO2,CO,O2 (default: all)");
+  command->add_option("--residence-time", options->residence_time,
+                      "Also estimate thermal NO after this time at the solved T and P, e.g. 20ms (0 s ... 1 h)");
   command->add_flag("--all", options->all, "Text output: list every product, also below mole fraction 1e-12");
   add_format_option(*command, options->format, {"text", "json"});
   command->add_option("--output", options->output, "Write to this file (whole or not at all) instead of stdout");

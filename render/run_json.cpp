@@ -3,6 +3,8 @@
 #include "stackbound/cases/run_document.hpp"
 #include "stackbound/units/constants.hpp"
 
+#include <optional>
+
 namespace stackbound::render {
 
 namespace {
@@ -17,6 +19,107 @@ double normal_m3_per_h(double mol_per_s, const units::NormalConditions& normal) 
   return mol_per_s * normal.molar_volume_m3_per_mol() * kSecondsPerHour;
 }
 
+// A pollutant's figures on every basis: the keys of the bound, and of its estimate and ceiling.
+nlohmann::json figure_json(double wet_mole_fraction, const em::StackEmission& e) {
+  using nlohmann::json;
+  return {
+      {"wet_mole_fraction", wet_mole_fraction},
+      {"ppmvd", e.ppmvd.value()},
+      {"ppmvd_at_ref_o2", e.ppmvd_at_reference.value()},
+      {"mg_per_Nm3_at_ref_o2", e.mg_per_Nm3_at_reference.result.value()},
+      {"kg_per_h", e.mass_rate.value() * kSecondsPerHour},
+      {"lb_per_h", e.mass_rate.value() * kSecondsPerHour / kKgPerLb},
+      {"t_per_yr", e.annual ? json(e.annual->value() / 1e3) : json(nullptr)},
+      {"lb_per_MMBtu", e.method19.lb_per_MMBtu()},
+      {"g_per_GJ", e.method19.g_per_GJ()},
+      {"lb_per_MMBtu_mass_balance", e.direct.lb_per_MMBtu()},
+      {"as_no2", e.ppmvd.pollutant().expressed_as_no2},
+  };
+}
+
+nlohmann::json optional_figure_json(const std::optional<PollutantFigure>& figure) {
+  return figure ? figure_json(figure->wet_mole_fraction, figure->emission) : nlohmann::json(nullptr);
+}
+
+nlohmann::json thermal_no_json(const std::optional<core::ThermalNoPathResult>& no) {
+  if (!no) return nullptr;
+  nlohmann::json history = nlohmann::json::array();
+  for (const core::ThermalNoSample& s : no->history) {
+    history.push_back({{"time_s", s.time_s},
+                       {"temperature_K", s.temperature_K},
+                       {"no_mole_fraction", s.no_mole_fraction},
+                       {"no_equilibrium_mole_fraction", s.no_equilibrium_mole_fraction}});
+  }
+  return {{"no_mole_fraction", no->no_mole_fraction},
+          {"no_equilibrium_mole_fraction_at_end", no->no_equilibrium_mole_fraction},
+          {"initial_no_mole_fraction", no->initial_no_mole_fraction},
+          {"rate_constants", no->rate_constants},
+          {"rate_constants_within_stated_range", no->rate_constants_within_stated_range},
+          {"history", history}};
+}
+
+nlohmann::json co_json(const std::optional<core::CoBurnoutResult>& co) {
+  if (!co) return nullptr;
+  return {{"initial_co_mole_fraction", co->initial_co_mole_fraction},
+          {"co_mole_fraction", co->co_mole_fraction},
+          {"co_equilibrium_mole_fraction_at_end", co->co_equilibrium_mole_fraction},
+          {"rate_expression", co->rate_expression},
+          {"within_measured_range", co->within_measured_range},
+          {"raised_to_equilibrium", co->raised_to_equilibrium}};
+}
+
+nlohmann::json fuel_nitrogen_json(const FuelNitrogenPart& n) {
+  using nlohmann::json;
+  json band = nullptr;
+  if (n.band) {
+    band = {{"low_fraction", n.band->band.low_fraction},
+            {"high_fraction", n.band->band.high_fraction},
+            {"status", n.band->band.status},
+            {"source", n.band->band.source}};
+  }
+  return {{"fuel_nitrogen_mol_per_kg", n.no.fuel_nitrogen_mol_per_kg},
+          {"conversion_fraction", n.no.conversion_fraction},
+          {"conversion_origin", to_string(n.origin)},
+          {"conversion_source", n.no.conversion_source},
+          {"typical_band", band},
+          {"no_estimate_wet_mole_fraction", n.estimate_wet_mole_fraction},
+          {"no_ceiling_wet_mole_fraction", n.ceiling_wet_mole_fraction}};
+}
+
+nlohmann::json post_flame_json(const RunResult& r) {
+  const PostFlame& p = r.post_flame;
+  const double thermal = p.thermal_no ? p.thermal_no->no_mole_fraction : 0.0;
+  const double fuel = p.fuel_nitrogen.estimate_wet_mole_fraction;
+  return {
+      {"residence_time_s", p.path.hold_time.value()},
+      {"residence_time_stated", r.definition.firing.residence_time_stated},
+      {"firing_temperature_K", p.path.firing_temperature.value()},
+      {"pressure_Pa", p.path.pressure.value()},
+      {"cooling",
+       {{"to_K", p.path.final_temperature.value()},
+        {"to_origin", p.cooling_to_origin},
+        {"time_s", p.path.cooling_time.value()},
+        {"time_stated", r.definition.post_flame.cooling_time_stated},
+        {"steps", p.path.cooling_steps},
+        {"profile", "linear"}}},
+      {"rate_sources",
+       {{"thermal_no", p.thermal_no ? nlohmann::json(p.thermal_no->rate_constants) : nlohmann::json(nullptr)},
+        {"co_burnout", p.co ? nlohmann::json(p.co->rate_expression) : nlohmann::json(nullptr)}}},
+      {"thermal_no", thermal_no_json(p.thermal_no)},
+      {"co_burnout", co_json(p.co)},
+      {"fuel_nitrogen", fuel_nitrogen_json(p.fuel_nitrogen)},
+      {"no_split",
+       {{"thermal_wet_mole_fraction", thermal},
+        {"fuel_wet_mole_fraction", fuel},
+        {"thermal_share", thermal + fuel > 0.0 ? nlohmann::json(thermal / (thermal + fuel)) : nlohmann::json(nullptr)}}},
+      {"highest_equilibrium_wet_mole_fraction",
+       {{"NO", p.highest_equilibrium_no}, {"NOx", p.highest_equilibrium_nox}, {"CO", p.highest_equilibrium_co}}},
+      {"assumptions", p.assumptions},
+      {"prompt_no", "not computed"},
+      {"caution", kPostFlameCaution},
+  };
+}
+
 }  // namespace
 
 nlohmann::json run_json(const RunResult& r) {
@@ -29,20 +132,9 @@ nlohmann::json run_json(const RunResult& r) {
   }
   json emissions = json::object();
   for (const PollutantBound& p : r.emissions.pollutants) {
-    const em::StackEmission& e = p.emission;
-    emissions[p.name] = {
-        {"wet_mole_fraction", p.wet_mole_fraction},
-        {"ppmvd", e.ppmvd.value()},
-        {"ppmvd_at_ref_o2", e.ppmvd_at_reference.value()},
-        {"mg_per_Nm3_at_ref_o2", e.mg_per_Nm3_at_reference.result.value()},
-        {"kg_per_h", e.mass_rate.value() * kSecondsPerHour},
-        {"lb_per_h", e.mass_rate.value() * kSecondsPerHour / kKgPerLb},
-        {"t_per_yr", e.annual ? json(e.annual->value() / 1e3) : json(nullptr)},
-        {"lb_per_MMBtu", e.method19.lb_per_MMBtu()},
-        {"g_per_GJ", e.method19.g_per_GJ()},
-        {"lb_per_MMBtu_mass_balance", e.direct.lb_per_MMBtu()},
-        {"as_no2", e.ppmvd.pollutant().expressed_as_no2},
-    };
+    emissions[p.name] = figure_json(p.wet_mole_fraction, p.emission);
+    emissions[p.name]["estimate"] = optional_figure_json(p.estimate);
+    emissions[p.name]["ceiling"] = optional_figure_json(p.ceiling);
   }
   json limits = json::array();
   for (const LimitScreening& l : r.screening.limits) {
@@ -121,6 +213,7 @@ nlohmann::json run_json(const RunResult& r) {
       {"reference_o2", {{"text", r.emissions.reference_o2_text}, {"from_preset", r.emissions.reference_o2_from_preset}}},
       {"o2_basis_percent", em::o2_basis_percent(r.definition.report.o2_basis)},
       {"normal_conditions", {{"key", r.emissions.normal->key}, {"description", r.emissions.normal->description}}},
+      {"post_flame", post_flame_json(r)},
       {"emissions", emissions},
       {"limits", limits},
       {"measured", measured},

@@ -102,6 +102,7 @@ std::vector<UnitDefinition> build_table() {
       {"MMBtu/hr", D::power, 1e6 * kBtuIT_J / kHour_s},
       // time
       {"s", D::time, 1.0},
+      {"ms", D::time, 1e-3},  // SI prefix milli (residence times of flames)
       {"min", D::time, 60.0},
       {"h", D::time, kHour_s},
       {"hr", D::time, kHour_s},

@@ -30,8 +30,9 @@ TEST(Pipeline, RunCaseIsTheStagesComposedInOrder) {
 
   const ResolvedCase resolved = resolve_stage(definition, db);
   const FiringState fired = fire_stage(definition.firing, resolved, db);
+  const PostFlame post_flame = post_flame_stage(definition, resolved, fired);
   const StackGas stack = stack_stage(definition.stack, definition.report.o2_basis, resolved, fired, true);
-  const EmissionFigures figures = emissions_stage(definition, resolved, fired, stack);
+  const EmissionFigures figures = emissions_stage(definition, resolved, fired, stack, {}, &post_flame);
   const Screening screening = screening_stage({definition, resolved, fired, stack, figures}, db);
 
   EXPECT_TRUE(is_close(run.fired.temperature_K, fired.temperature_K, 0.0));
@@ -43,11 +44,18 @@ TEST(Pipeline, RunCaseIsTheStagesComposedInOrder) {
     const auto& b = figures.pollutants[i].emission;
     EXPECT_TRUE(is_close(a.mg_per_Nm3_at_reference.result.value(), b.mg_per_Nm3_at_reference.result.value(), 0.0));
     EXPECT_TRUE(is_close(a.method19.lb_per_MMBtu(), b.method19.lb_per_MMBtu(), 0.0));
+    const auto& run_estimate = run.emissions.pollutants[i].estimate;
+    const auto& hand_estimate = figures.pollutants[i].estimate;
+    ASSERT_EQ(run_estimate.has_value(), hand_estimate.has_value());
+    if (run_estimate) {
+      EXPECT_TRUE(is_close(run_estimate->emission.ppmvd_at_reference.value(),
+                           hand_estimate->emission.ppmvd_at_reference.value(), 0.0));
+    }
   }
   EXPECT_EQ(run.screening.findings, screening.findings);
   EXPECT_EQ(run.screening.cautions, screening.cautions);
-  EXPECT_TRUE(run.stages_run.resolve && run.stages_run.fire && run.stages_run.stack && run.stages_run.emissions &&
-              run.stages_run.screening);
+  EXPECT_TRUE(run.stages_run.resolve && run.stages_run.fire && run.stages_run.post_flame && run.stages_run.stack &&
+              run.stages_run.emissions && run.stages_run.screening);
 }
 
 // Wrong if a rerun from the emissions stage ran an earlier stage, or its kept firing state and stack

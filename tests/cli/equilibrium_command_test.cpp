@@ -11,6 +11,8 @@
 #include "stackbound/core/adiabatic_flame.hpp"
 #include "stackbound/core/element_amounts.hpp"
 #include "stackbound/core/equilibrium.hpp"
+#include "stackbound/core/post_flame.hpp"
+#include "stackbound/core/thermal_no.hpp"
 #include "tests/support/run_binary.hpp"
 #include "tests/support/tolerance.hpp"
 #include "stackbound/units/constants.hpp"
@@ -151,6 +153,79 @@ TEST(EquilibriumCommand, BadInputIsAnErrorNamingTheOption) {
     EXPECT_EQ(run.out, "") << c.fragment;
     EXPECT_NE(run.err.find(c.fragment), std::string::npos) << "expected: " << c.fragment << "\nstderr: " << run.err;
   }
+}
+
+// Wrong if --residence-time did not add the documented thermal_no keys, or printed values other than
+// the core function's for the same feed, T, P and time.
+TEST(EquilibriumCommand, ThermalNoCarriesTheCoreResult) {
+  const ProcessResult run = run_stackbound({"equilibrium", "--feed", "CH4 + 2.4 O2 + 9.03 N2", "--temperature", "1900K",
+                                            "--pressure", "2 bar", "--residence-time", "20ms", "--format", "json"});
+  ASSERT_EQ(run.exit_code, 0) << run.err;
+  const nlohmann::json no = nlohmann::json::parse(run.out).at("thermal_no");
+  const std::vector<core::SpeciesAmount> feed{{"CH4", 1.0}, {"O2", 2.4}, {"N2", 9.03}};
+  const core::ElementAmounts b = core::element_amounts(builtin_species(), feed);
+  const core::ThermalNoResult expected =
+      core::thermal_no(core::EquilibriumSolver(builtin_species(), b), b, units::kelvin(1900.0), units::pascals(2e5),
+                       units::seconds(0.020));
+  EXPECT_TRUE(is_close(no.at("residence_time_s").get<double>(), 0.020, 1e-15));
+  EXPECT_TRUE(is_close(no.at("no_mole_fraction").get<double>(), expected.no_mole_fraction, 1e-12, 1e-300));
+  EXPECT_TRUE(is_close(no.at("no_equilibrium_mole_fraction").get<double>(), expected.no_equilibrium_mole_fraction,
+                       1e-12, 1e-300));
+  EXPECT_TRUE(is_close(no.at("initial_rate_mole_fraction_per_s").get<double>(),
+                       expected.initial_rate_mole_fraction_per_s, 1e-12, 1e-300));
+  EXPECT_EQ(no.at("rate_constants").get<std::string>(), expected.rate_constants);
+  EXPECT_GT(expected.no_mole_fraction, 0.0);
+  EXPECT_LT(expected.no_mole_fraction, expected.no_equilibrium_mole_fraction);
+}
+
+// Wrong if with --adiabatic thermal NO were not computed at the adiabatic flame temperature.
+TEST(EquilibriumCommand, ThermalNoWithAdiabaticIsAtTheFlameTemperature) {
+  const ProcessResult run = run_stackbound({"equilibrium", "--feed", "CH4 + 2.4 O2 + 9.03 N2", "--adiabatic",
+                                            "--residence-time", "0.05 s", "--format", "json"});
+  ASSERT_EQ(run.exit_code, 0) << run.err;
+  const nlohmann::json json = nlohmann::json::parse(run.out);
+  EXPECT_EQ(json.at("thermal_no").at("temperature_K").get<double>(), json.at("temperature_K").get<double>());
+  EXPECT_GT(json.at("thermal_no").at("no_mole_fraction").get<double>(), 0.0);
+}
+
+// Wrong if the text output lost the thermal NO lines, their units or the caution on what they are.
+TEST(EquilibriumCommand, ThermalNoTextHasUnitsAndCaution) {
+  const ProcessResult run = run_stackbound(
+      {"equilibrium", "--feed", "CH4 + 2.4 O2 + 9.03 N2", "--temperature", "1900K", "--residence-time", "20ms"});
+  ASSERT_EQ(run.exit_code, 0) << run.err;
+  for (const char* fragment : {"Thermal NO after a residence time of 0.02 s at 1900.00 K", "ppmv",
+                               "1/s (mole fraction per second)", "rate constants", "Hanson",
+                               "kinetic estimate with equilibrium O and OH", "prompt NO is not computed"}) {
+    EXPECT_NE(run.out.find(fragment), std::string::npos) << fragment << "\n" << run.out;
+  }
+}
+
+// Wrong if a bad residence time were answered, or the message did not name the option and value.
+TEST(EquilibriumCommand, BadResidenceTimeIsAnErrorNamingTheOption) {
+  struct Case {
+    std::vector<std::string> arguments;
+    const char* fragment;
+  };
+  const Case cases[] = {
+      {{"--residence-time", "-5ms"}, "--residence-time = \"-5ms\" (-0.005 s): must be a finite time from 0 s"},
+      {{"--residence-time", "2h"}, "--residence-time = \"2h\" (7200 s): must be a finite time from 0 s to 3600 s"},
+      {{"--residence-time", "20"}, "--residence-time"},
+      {{"--residence-time", "20 K"}, "--residence-time"},
+      {{"--residence-time", "nan s"}, "--residence-time"},
+  };
+  for (const Case& c : cases) {
+    std::vector<std::string> arguments{"equilibrium", "--feed", "CH4 + 2.4 O2 + 9.03 N2", "--temperature", "1900K"};
+    arguments.insert(arguments.end(), c.arguments.begin(), c.arguments.end());
+    const ProcessResult run = run_stackbound(arguments);
+    EXPECT_EQ(run.exit_code, 2) << c.fragment;
+    EXPECT_EQ(run.out, "") << c.fragment;
+    EXPECT_NE(run.err.find(c.fragment), std::string::npos) << "expected: " << c.fragment << "\nstderr: " << run.err;
+  }
+  const ProcessResult no_nitrogen =
+      run_stackbound({"equilibrium", "--feed", "CH4 + 2 O2", "--temperature", "1900K", "--residence-time", "20ms"});
+  EXPECT_EQ(no_nitrogen.exit_code, 2);
+  EXPECT_NE(no_nitrogen.err.find("--residence-time = \"20ms\": species: thermal NO needs"), std::string::npos)
+      << no_nitrogen.err;
 }
 
 }  // namespace

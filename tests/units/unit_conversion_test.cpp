@@ -217,5 +217,11 @@ TEST(UnitConversion, TonnesPerYearUseEightThousandSevenHundredSixtyHours) {
   EXPECT_TRUE(is_close(si("1 lb/h", D::mass_flow), 0.45359237 / 3600.0, kExact));
 }
 
+// Wrong if a millisecond were not 1e-3 s (the SI prefix), the unit of flame residence times.
+TEST(UnitConversion, MillisecondIsOneThousandthOfASecond) {
+  EXPECT_TRUE(is_close(si("20 ms", D::time), 0.020, kExact));
+  EXPECT_TRUE(is_close(si("20ms", D::time), si("0.02 s", D::time), kExact));
+}
+
 }  // namespace
 }  // namespace stackbound::units
