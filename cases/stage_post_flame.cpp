@@ -28,11 +28,11 @@ CoolingTarget cooling_target(const CaseDefinition& definition) {
 core::PostFlamePath path_of(const CaseDefinition& definition, const FiringState& fired, const CoolingTarget& target,
                             const core::EquilibriumSolver& solver) {
   const double T = target.temperature_K;
-  if (!(std::isfinite(T) && T >= solver.min_temperature_K() && T <= solver.max_temperature_K())) {
+  if (!(std::isfinite(T) && T >= solver.min_temperature().value() && T <= solver.max_temperature().value())) {
     const std::string field = definition.post_flame.cooling_to_K ? "post_flame.cooling_to" : "stack.temperature";
     throw units::InputError(fmt::format("{0}: {0} = {1:g} K: the post-flame gas cools to it, so it must lie within "
                                         "the species data range {2:g}-{3:g} K",
-                                        field, T, solver.min_temperature_K(), solver.max_temperature_K()));
+                                        field, T, solver.min_temperature().value(), solver.max_temperature().value()));
   }
   core::PostFlamePath path;
   path.firing_temperature = units::kelvin(fired.temperature_K);
