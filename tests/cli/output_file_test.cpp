@@ -107,29 +107,29 @@ TEST_F(OutputFile, DirectoryIsRefused) {
   EXPECT_NE(run.err.find("is a directory; give a file name"), std::string::npos) << run.err;
 }
 
+// What the shell prints for `script` (its stdout), read whole.
+std::string shell_output(const std::string& script) {
+  FILE* pipe = ::popen(script.c_str(), "r");
+  if (pipe == nullptr) return "popen failed";
+  std::string text;
+  char buffer[4096];
+  std::size_t count = 0;
+  while ((count = std::fread(buffer, 1, sizeof buffer, pipe)) > 0) text.append(buffer, count);
+  ::pclose(pipe);
+  return text;
+}
+
 // Wrong if a failed write to standard output (a full disk) still exited 0.
 TEST(StandardOutput, FailedWriteIsAnErrorWithExitCode2) {
   const std::string command = testing::shell_quote(STACKBOUND_BINARY) + " species >/dev/full 2>&1";
-  FILE* pipe = ::popen((command + " ; echo \"exit=$?\"").c_str(), "r");
-  ASSERT_NE(pipe, nullptr);
-  std::string text;
-  char buffer[4096];
-  std::size_t count = 0;
-  while ((count = std::fread(buffer, 1, sizeof buffer, pipe)) > 0) text.append(buffer, count);
-  ::pclose(pipe);
+  const std::string text = shell_output(command + " ; echo \"exit=$?\"");
   EXPECT_NE(text.find("exit=2"), std::string::npos) << text;
 }
 
-// Wrong if stderr did not say what failed when standard output is closed (the message is on stderr).
-TEST(StandardOutput, ClosedStandardOutputIsNamedInTheError) {
+// Wrong if a run with standard output closed still exited 0 (nothing was written, and nobody was told).
+TEST(StandardOutput, ClosedStandardOutputIsAnErrorWithExitCode2) {
   const std::string command = testing::shell_quote(STACKBOUND_BINARY) + " species >&- 2>&1; echo \"exit=$?\"";
-  FILE* pipe = ::popen(("{ " + command + " ; } 3>&1").c_str(), "r");
-  ASSERT_NE(pipe, nullptr);
-  std::string text;
-  char buffer[4096];
-  std::size_t count = 0;
-  while ((count = std::fread(buffer, 1, sizeof buffer, pipe)) > 0) text.append(buffer, count);
-  ::pclose(pipe);
+  const std::string text = shell_output("{ " + command + " ; } 3>&1");
   EXPECT_NE(text.find("exit=2"), std::string::npos) << text;
 }
 
