@@ -77,6 +77,16 @@ struct OperatingSpec {
 // The key of the operating point's value in the file ("operating_point.excess_air" ...).
 std::string_view operating_field(OperatingMode mode);
 
+// A primary zone (core/primary_zone.hpp): the fuel burns first with part of the oxidant, given by the
+// zone's equivalence ratio or by the share of the oxidant entering it; the rest mixes in afterwards.
+struct PrimaryZoneCaseSpec {
+  std::optional<double> equivalence_ratio;     // exactly one of the two is stated
+  std::optional<double> air_share;             // fraction of the oxidant, (0, 1]
+  double residence_time_s = 0.0;               // required
+  double heat_loss_fraction = 0.0;             // of the heat input, lost in the zone; default 0 (adiabatic)
+  bool heat_loss_stated = false;
+};
+
 struct FiringSpec {
   bool adiabatic = false;
   double temperature_K = 0.0;                  // when not adiabatic
@@ -87,6 +97,7 @@ struct FiringSpec {
   // states (kDefaultResidenceTime_s).
   double residence_time_s = 0.020;
   bool residence_time_stated = false;
+  std::optional<PrimaryZoneCaseSpec> primary_zone;  // requires adiabatic
 };
 
 // The post-flame path after the hold: linear cooling to `cooling_to` over `cooling_time`

@@ -145,8 +145,33 @@ OperatingSpec operating_spec(const YamlField& op) {
   return spec;
 }
 
+PrimaryZoneCaseSpec primary_zone_spec(const YamlField& zone, const FiringSpec& firing) {
+  zone.allow_only({"equivalence_ratio", "air_share", "residence_time", "heat_loss"});
+  if (!firing.adiabatic) {
+    zone.fail("needs firing.adiabatic: true (the remaining oxidant mixes in at constant enthalpy, so the mixed "
+              "state is the adiabatic state of the whole mixture)");
+  }
+  PrimaryZoneCaseSpec spec;
+  const std::string kind = zone.one_of({"equivalence_ratio", "air_share"});
+  const YamlField value = zone.required(kind);
+  if (kind == "equivalence_ratio") {
+    spec.equivalence_ratio = value.number();
+    if (!(*spec.equivalence_ratio >= 0.09 && *spec.equivalence_ratio <= 4.0)) value.fail("must be between 0.09 and 4");
+  } else {
+    spec.air_share = fraction_in(value, 1e-3, 1.0, "must be between 0.1 % and 100 % of the oxidant");
+  }
+  spec.residence_time_s = time_s(zone.required("residence_time"), kResidenceTime);
+  if (const auto loss = zone.optional("heat_loss")) {
+    spec.heat_loss_fraction = fraction_in(*loss, 0.0, firing.heat_loss_fraction,
+                                          "must be between 0 % and firing.heat_loss (the zone loses part of the "
+                                          "whole flame's loss, the rest is lost after mixing)");
+    spec.heat_loss_stated = true;
+  }
+  return spec;
+}
+
 FiringSpec firing_spec(const YamlField& firing) {
-  firing.allow_only({"temperature", "adiabatic", "heat_loss", "pressure", "species", "residence_time"});
+  firing.allow_only({"temperature", "adiabatic", "heat_loss", "pressure", "species", "residence_time", "primary_zone"});
   FiringSpec spec;
   if (const auto adiabatic = firing.optional("adiabatic")) spec.adiabatic = adiabatic->boolean();
   if (spec.adiabatic) {
@@ -164,6 +189,7 @@ FiringSpec firing_spec(const YamlField& firing) {
     spec.residence_time_s = time_s(*time, kResidenceTime);
     spec.residence_time_stated = true;
   }
+  if (const auto zone = firing.optional("primary_zone")) spec.primary_zone = primary_zone_spec(*zone, spec);
   return spec;
 }
 

@@ -114,13 +114,27 @@ std::string figure_cell(const std::optional<PollutantFigure>& figure, bool mass)
   return num(mass ? e.mg_per_Nm3_at_reference.result.value() : e.ppmvd_at_reference.value());
 }
 
+std::string primary_zone_note(const PrimaryZonePart& z) {
+  return fmt::format(
+      "Primary zone: equivalence ratio {:.4g} ({:.4g} % of the oxidant; {}), adiabatic temperature {:.1f} K{}, "
+      "{:g} ms: thermal NO {} ppmv there, {} ppmv wet in the mixed gas once the rest of the oxidant is mixed in at "
+      "constant enthalpy; the zone's CO ({} ppmv wet in the mixed gas) is where CO burnout starts.",
+      z.zone.equivalence_ratio, z.zone.air_share * 100.0, z.share_origin, z.zone.temperature().value(),
+      z.zone.heat_loss_fraction > 0.0 ? fmt::format(" with {:g} % of the heat input lost", z.zone.heat_loss_fraction * 100.0)
+                                      : std::string(),
+      z.residence_time_s * 1e3, num(z.zone.thermal_no.no_mole_fraction * 1e6), num(z.no_carried * 1e6),
+      num(z.co_carried * 1e6));
+}
+
 std::vector<std::string> post_flame_notes(const PostFlame& p) {
   std::vector<std::string> notes;
+  if (p.primary_zone) notes.push_back(primary_zone_note(*p.primary_zone));
   notes.push_back(fmt::format(
-      "Path: {:g} ms at {:.1f} K, then linear cooling to {:.1f} K ({}) over {:g} s, at {:.4g} kPa. Estimate: "
+      "Path{}: {:g} ms at {:.1f} K, then linear cooling to {:.1f} K ({}) over {:g} s, at {:.4g} kPa. Estimate: "
       "kinetics along that path; ceiling: the larger of the highest equilibrium value along the path and the "
       "kinetic NO with all fuel nitrogen as NO; bound: the frozen equilibrium at the firing temperature (as above).",
-      p.path.hold_time.value() * 1e3, p.path.firing_temperature.value(), p.path.final_temperature.value(),
+      p.primary_zone ? " after the primary zone, in the mixed gas" : "", p.path.hold_time.value() * 1e3,
+      p.path.firing_temperature.value(), p.path.final_temperature.value(),
       p.cooling_to_origin, p.path.cooling_time.value(), p.path.pressure.value() / 1e3));
   if (p.thermal_no) {
     notes.push_back(fmt::format("NO split (wet): thermal {} ppmv, fuel nitrogen {} ppmv ({}, conversion {:g} %). "
@@ -135,7 +149,9 @@ std::vector<std::string> post_flame_notes(const PostFlame& p) {
     notes.push_back("Thermal NO not computed: the products lack O, O2, N2 or NO (firing.species).");
   }
   if (p.co) {
-    notes.push_back(fmt::format("CO burnout from the equilibrium CO at the firing temperature: {}{}.",
+    notes.push_back(fmt::format("CO burnout from {}: {}{}.",
+                                p.primary_zone ? "the primary zone's CO carried into the mixed gas"
+                                               : "the equilibrium CO at the firing temperature",
                                 p.co->rate_expression,
                                 p.co->within_measured_range ? "" : " (used outside the temperatures it was measured at)"));
   }

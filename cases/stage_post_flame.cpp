@@ -75,6 +75,40 @@ FuelNitrogenPart fuel_nitrogen_part(const CaseDefinition& definition, const Reso
   return part;
 }
 
+// The primary zone of firing.primary_zone, its share of the oxidant from the stated equivalence ratio
+// or share, and what it carries into the mixed gas of the firing state.
+PrimaryZonePart primary_zone_part(const PrimaryZoneCaseSpec& stated, const ResolvedCase& resolved,
+                                  const FiringState& fired) {
+  const double overall = resolved.combustion.equivalence_ratio();
+  PrimaryZonePart part;
+  core::PrimaryZoneSpec spec;
+  spec.field = "firing.primary_zone";
+  if (stated.equivalence_ratio) {
+    part.share_origin = "firing.primary_zone.equivalence_ratio";
+    if (!(*stated.equivalence_ratio >= overall)) {
+      throw units::InputError(fmt::format(
+          "{}: {} = {:g} is leaner than the whole mixture ({:.4g}): the primary zone cannot take more than all "
+          "of the oxidant",
+          part.share_origin, "equivalence_ratio", *stated.equivalence_ratio, overall));
+    }
+    spec.air_share = overall / *stated.equivalence_ratio;
+  } else {
+    part.share_origin = "firing.primary_zone.air_share";
+    spec.air_share = *stated.air_share;
+  }
+  spec.residence_time = units::seconds(stated.residence_time_s);
+  spec.heat_loss_fraction = stated.heat_loss_fraction;
+  part.residence_time_s = stated.residence_time_s;
+  part.zone = at_field("firing.primary_zone", [&] {
+    return core::primary_zone(*fired.solver, resolved.combustion, spec, units::pascals(fired.pressure_Pa));
+  });
+  const double mixed = fired.equilibrium.total_gas_moles;
+  part.no_carried = part.zone.carried_into(part.zone.thermal_no.no_mole_fraction, mixed);
+  part.no_equilibrium_carried = part.zone.carried_into(part.zone.equilibrium.mole_fraction("NO"), mixed);
+  part.co_carried = part.zone.carried_into(part.zone.equilibrium.mole_fraction("CO"), mixed);
+  return part;
+}
+
 std::vector<std::string> assumptions_of(const CaseDefinition& definition, const PostFlame& post) {
   std::vector<std::string> notes;
   if (!definition.firing.residence_time_stated) {
@@ -88,6 +122,9 @@ std::vector<std::string> assumptions_of(const CaseDefinition& definition, const 
   if (!definition.post_flame.cooling_time_stated) {
     notes.push_back(fmt::format("Post-flame cooling time {:g} s, linear (default; post_flame.cooling_time)",
                                 definition.post_flame.cooling_time_s));
+  }
+  if (definition.firing.primary_zone && !definition.firing.primary_zone->heat_loss_stated) {
+    notes.push_back("Primary zone adiabatic: no heat lost in the zone (default; firing.primary_zone.heat_loss)");
   }
   const FuelNitrogenPart& n = post.fuel_nitrogen;
   if (n.origin == ConversionOrigin::typical_band) {
@@ -128,13 +165,22 @@ PostFlame post_flame_stage(const CaseDefinition& definition, const ResolvedCase&
     post.highest_equilibrium_no = std::max(post.highest_equilibrium_no, node.gas.no);
     post.highest_equilibrium_co = std::max(post.highest_equilibrium_co, node.gas.co);
   }
+  core::ThermalNoOptions no_options;
+  core::CoBurnoutOptions co_options;
+  if (definition.firing.primary_zone) {
+    post.primary_zone = primary_zone_part(*definition.firing.primary_zone, resolved, fired);
+    post.highest_equilibrium_no = std::max(post.highest_equilibrium_no, post.primary_zone->no_equilibrium_carried);
+    post.highest_equilibrium_co = std::max(post.highest_equilibrium_co, post.primary_zone->co_carried);
+    no_options.initial_no_mole_fraction = post.primary_zone->no_carried;
+    co_options.initial_co_mole_fraction = post.primary_zone->co_carried;
+  }
   post.highest_equilibrium_nox =
       std::max(post.highest_equilibrium_no,
                fired.equilibrium.mole_fraction("NO") + fired.equilibrium.mole_fraction("NO2"));
   if (history.firing().has_nitrogen_chemistry && history.firing().no > 0.0 && history.firing().n2 > 0.0) {
-    post.thermal_no = core::thermal_no_along(history);
+    post.thermal_no = core::thermal_no_along(history, no_options);
   }
-  if (history.firing().has_carbon_monoxide) post.co = core::co_burnout_along(history);
+  if (history.firing().has_carbon_monoxide) post.co = core::co_burnout_along(history, co_options);
   post.fuel_nitrogen = fuel_nitrogen_part(definition, resolved);
   post.assumptions = assumptions_of(definition, post);
   return post;

@@ -1,6 +1,7 @@
 #pragma once
 // Stage 3 of a run, post-flame: what the gas does between the flame and the stack, by the kinetics of
-// core/ (core/post_flame.hpp): a hold at the firing temperature for firing.residence_time, then linear
+// core/ (core/post_flame.hpp): an optional primary zone (firing.primary_zone, core/primary_zone.hpp)
+// whose NO and CO enter the mixed gas at the firing state (the adiabatic state of the whole mixture), a hold at the firing temperature for firing.residence_time, then linear
 // cooling to post_flame.cooling_to over post_flame.cooling_time. Along that path it follows thermal NO
 // (extended Zeldovich with equilibrium radicals, core/thermal_no.hpp) and CO burnout
 // (core/co_burnout.hpp), and adds NO from fuel-bound nitrogen (core/fuel_nitrogen.hpp).
@@ -11,8 +12,12 @@
 //                       typical band, its upper end; else 100 %),
 //            ceiling  = max(highest equilibrium NO (NOx: NO + NO2) along the path, thermal NO + fuel-N
 //                       NO at 100 %);
-//   CO       estimate = CO after burnout, starting from the equilibrium CO at the firing temperature,
-//            ceiling  = highest equilibrium CO along the path (at the firing temperature when cooling).
+//   CO       estimate = CO after burnout, starting from the equilibrium CO at the firing temperature
+//                       (with a primary zone: the zone's equilibrium CO carried into the mixed gas),
+//            ceiling  = highest equilibrium CO along the path (at the firing temperature when cooling),
+//                       or the zone's carried CO when higher.
+// With a primary zone, the path's NO starts from the zone's thermal NO carried into the mixed gas, and
+// the zone's carried equilibrium NO joins the "highest equilibrium" of the ceiling.
 // Prompt NO is not computed. Unstated times and temperatures are defaults the report states.
 
 #include <optional>
@@ -26,6 +31,7 @@
 #include "stackbound/core/co_burnout.hpp"
 #include "stackbound/core/fuel_nitrogen.hpp"
 #include "stackbound/core/post_flame.hpp"
+#include "stackbound/core/primary_zone.hpp"
 #include "stackbound/core/thermal_no.hpp"
 
 namespace stackbound::cases {
@@ -54,7 +60,18 @@ struct FuelNitrogenPart {
   double ceiling_wet_mole_fraction = 0.0;
 };
 
+// The primary zone (firing.primary_zone) and what it hands to the mixed gas where the path starts.
+struct PrimaryZonePart {
+  core::PrimaryZone zone;
+  double residence_time_s = 0.0;
+  std::string share_origin;            // "firing.primary_zone.equivalence_ratio" or "...air_share"
+  double no_carried = 0.0;             // the zone's thermal NO, as a wet mole fraction of the mixed gas
+  double no_equilibrium_carried = 0.0; // the zone's equilibrium NO, likewise (part of the ceiling)
+  double co_carried = 0.0;             // the zone's equilibrium CO, likewise: where CO burnout starts
+};
+
 struct PostFlame {
+  std::optional<PrimaryZonePart> primary_zone;  // when firing.primary_zone is stated
   core::PostFlamePath path;           // firing T and P, hold, cooling as run
   std::string cooling_to_origin;      // "post_flame.cooling_to", "stack.temperature" or the stack default
   // Thermal NO along the path; nullopt when the products lack O, O2, N2 or NO (firing.species).
@@ -74,8 +91,8 @@ struct PostFlame {
   [[nodiscard]] std::optional<double> ceiling_wet_fraction(std::string_view pollutant) const;
 };
 
-// Runs the stage on the firing state. Errors name "firing.residence_time", "post_flame.cooling_to",
-// "post_flame" or "fuel.nitrogen_conversion"; core::ConvergenceError if a path equilibrium fails.
+// Runs the stage on the firing state. Errors name "firing.residence_time", "firing.primary_zone",
+// "post_flame.cooling_to", "post_flame" or "fuel.nitrogen_conversion"; core::ConvergenceError if a path equilibrium fails.
 PostFlame post_flame_stage(const CaseDefinition& definition, const ResolvedCase& resolved, const FiringState& fired);
 
 }  // namespace stackbound::cases

@@ -15,6 +15,7 @@
 #include "stackbound/core/humidity.hpp"
 #include "stackbound/core/oxidant.hpp"
 #include "stackbound/core/post_flame.hpp"
+#include "stackbound/core/primary_zone.hpp"
 #include "stackbound/core/species.hpp"
 #include "stackbound/core/species_database.hpp"
 #include "stackbound/core/thermal_no.hpp"

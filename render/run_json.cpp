@@ -86,11 +86,45 @@ nlohmann::json fuel_nitrogen_json(const FuelNitrogenPart& n) {
           {"no_ceiling_wet_mole_fraction", n.ceiling_wet_mole_fraction}};
 }
 
+nlohmann::json primary_zone_json(const std::optional<PrimaryZonePart>& part) {
+  if (!part) return nullptr;
+  const core::PrimaryZone& z = part->zone;
+  return {{"equivalence_ratio", z.equivalence_ratio},
+          {"air_share", z.air_share},
+          {"share_origin", part->share_origin},
+          {"temperature_K", z.temperature().value()},
+          {"residence_time_s", part->residence_time_s},
+          {"heat_loss_fraction", z.heat_loss_fraction},
+          {"no_mole_fraction", z.thermal_no.no_mole_fraction},
+          {"no_equilibrium_mole_fraction", z.thermal_no.no_equilibrium_mole_fraction},
+          {"rate_constants", z.thermal_no.rate_constants},
+          {"mixed_gas_wet_mole_fraction",
+           {{"NO", part->no_carried}, {"NO_equilibrium", part->no_equilibrium_carried}, {"CO", part->co_carried}}}};
+}
+
+// The zones the gas passes through in order, each with its temperature(s) and time.
+nlohmann::json zones_json(const PostFlame& p) {
+  nlohmann::json zones = nlohmann::json::array();
+  if (p.primary_zone) {
+    zones.push_back({{"zone", "primary"},
+                     {"temperature_K", p.primary_zone->zone.temperature().value()},
+                     {"time_s", p.primary_zone->residence_time_s}});
+  }
+  zones.push_back({{"zone", "hold"}, {"temperature_K", p.path.firing_temperature.value()}, {"time_s", p.path.hold_time.value()}});
+  zones.push_back({{"zone", "cooling"},
+                   {"from_K", p.path.firing_temperature.value()},
+                   {"to_K", p.path.final_temperature.value()},
+                   {"time_s", p.path.cooling_time.value()}});
+  return zones;
+}
+
 nlohmann::json post_flame_json(const RunResult& r) {
   const PostFlame& p = r.post_flame;
   const double thermal = p.thermal_no ? p.thermal_no->no_mole_fraction : 0.0;
   const double fuel = p.fuel_nitrogen.estimate_wet_mole_fraction;
   return {
+      {"zones", zones_json(p)},
+      {"primary_zone", primary_zone_json(p.primary_zone)},
       {"residence_time_s", p.path.hold_time.value()},
       {"residence_time_stated", r.definition.firing.residence_time_stated},
       {"firing_temperature_K", p.path.firing_temperature.value()},

@@ -11,6 +11,7 @@
 #include <nlohmann/json.hpp>
 
 #include "stackbound/cases/case_file.hpp"
+#include "stackbound/core/adiabatic_flame.hpp"
 #include "stackbound/cases/pipeline.hpp"
 #include "stackbound/cases/source_map.hpp"
 #include "stackbound/cases/species_file.hpp"
@@ -228,6 +229,104 @@ TEST(PostFlameStage, CoolingTargetOutsideTheDataIsRefusedAtItsPosition) {
     EXPECT_NE(std::string(error.what()).find("t.yaml:5:"), std::string::npos) << error.what();
     EXPECT_NE(std::string(error.what()).find("50 K"), std::string::npos) << error.what();
   }
+}
+
+// Wrong if the gas turbine's primary zone were not at the adiabatic temperature of the fuel with its
+// share of the air: an HP solve of the same feed, assembled here from the fuel's gas species and the
+// oxidant's composition at their own temperatures (core/adiabatic_flame.hpp), must give the same
+// temperature. Also wrong if the share did not follow from the stated equivalence ratio.
+TEST(PostFlameStage, GasTurbinePrimaryZoneIsAtTheAdiabaticTemperatureOfItsMixture) {
+  const CaseDefinition definition = load_case(example("gas_turbine.yaml"));
+  ASSERT_TRUE(definition.firing.primary_zone.has_value());
+  const RunResult run = run_case(definition, builtin_species());
+  ASSERT_TRUE(run.post_flame.primary_zone.has_value());
+  const PrimaryZonePart& zone = *run.post_flame.primary_zone;
+  const core::CombustionResult& c = run.resolved.combustion;
+  EXPECT_TRUE(is_close(zone.zone.air_share, c.equivalence_ratio() / *definition.firing.primary_zone->equivalence_ratio,
+                       1e-14));
+  core::FeedStream fuel{{}, c.fuel_temperature()};
+  for (const auto& [formula, moles] : run.resolved.fuel.gas_mol_per_kg()) fuel.species.push_back({formula, moles});
+  core::FeedStream air{{}, c.oxidant_temperature()};
+  for (std::size_t i = 0; i < core::kOxidantSpeciesCount; ++i) {
+    const double x = run.resolved.oxidant.mole_fractions()[i];
+    if (x > 0.0) air.species.push_back({std::string(core::kOxidantSpeciesNames[i]), x * zone.zone.air_share * c.oxidant_mol_per_kg});
+  }
+  const std::vector<core::FeedStream> streams{fuel, air};
+  core::AdiabaticFlameOptions options;
+  options.pressure = units::pascals(run.fired.pressure_Pa);
+  const core::EquilibriumResult hp = core::adiabatic_flame(builtin_species(), streams, options);
+  EXPECT_TRUE(is_close(zone.zone.temperature().value(), hp.temperature_K, 1e-8)) << zone.zone.temperature().value()
+                                                                                 << " K against " << hp.temperature_K;
+  // Hotter than the mixed-out gas, where the post-flame path starts.
+  EXPECT_GT(zone.zone.temperature().value(), run.fired.temperature_K + 300.0);
+}
+
+// Wrong if the primary zone's NO did not enter the path (the estimate would be the near-zero NO of the
+// mixed-out gas) or was carried in at the zone's own mole fraction instead of diluted by the rest of
+// the air; or if its equilibrium NO and CO were left out of the ceiling.
+TEST(PostFlameStage, PrimaryZoneNoIsCarriedIntoTheMixedGas) {
+  const CaseDefinition with_zone = load_case(example("gas_turbine.yaml"));
+  CaseDefinition without_zone = with_zone;
+  without_zone.firing.primary_zone.reset();
+  const RunResult zoned = run_case(with_zone, builtin_species());
+  const RunResult plain = run_case(without_zone, builtin_species());
+  const PrimaryZonePart& zone = *zoned.post_flame.primary_zone;
+  const double dilution = zone.zone.equilibrium.total_gas_moles / zoned.fired.equilibrium.total_gas_moles;
+  EXPECT_GT(dilution, 0.3);
+  EXPECT_LT(dilution, 0.9);
+  EXPECT_TRUE(is_close(zone.no_carried, zone.zone.thermal_no.no_mole_fraction * dilution, 1e-14));
+  ASSERT_TRUE(zoned.post_flame.thermal_no.has_value());
+  EXPECT_TRUE(is_close(zoned.post_flame.thermal_no->initial_no_mole_fraction, zone.no_carried, 0.0));
+  EXPECT_GT(pollutant(zoned, "NO").estimate->wet_mole_fraction, 10.0 * pollutant(plain, "NO").estimate->wet_mole_fraction);
+  EXPECT_GE(pollutant(zoned, "NO").ceiling->wet_mole_fraction, zone.no_equilibrium_carried);
+  EXPECT_GE(pollutant(zoned, "CO").ceiling->wet_mole_fraction, zone.co_carried);
+  // The bound stays the frozen equilibrium of the mixed-out firing state.
+  EXPECT_TRUE(is_close(pollutant(zoned, "NO").wet_mole_fraction, pollutant(plain, "NO").wet_mole_fraction, 0.0));
+}
+
+// Wrong if a primary zone were accepted where it cannot mean anything (a stated firing temperature, a
+// zone leaner than the whole mixture, no residence time, a zone losing more heat than the flame) or
+// its message did not name the field.
+TEST(PostFlameStage, PrimaryZoneFieldsAreChecked) {
+  const std::string head =
+      "case: {title: t}\nfuel: {preset: natural_gas, feed_rate: 1 MW}\noperating_point: {excess_air: 200 %}\n";
+  struct Bad {
+    std::string firing;
+    const char* message;
+  };
+  const Bad bad[] = {
+      {"{temperature: 1800 K, primary_zone: {equivalence_ratio: 0.6, residence_time: 5 ms}}",
+       "firing.primary_zone: needs firing.adiabatic: true"},
+      {"{adiabatic: true, primary_zone: {equivalence_ratio: 0.6}}", "firing.primary_zone: missing required key \"residence_time\""},
+      {"{adiabatic: true, primary_zone: {equivalence_ratio: 0.6, air_share: 50 %, residence_time: 5 ms}}",
+       "firing.primary_zone"},
+      {"{adiabatic: true, heat_loss: 5 %, primary_zone: {air_share: 50 %, residence_time: 5 ms, heat_loss: 10 %}}",
+       "firing.primary_zone.heat_loss"},
+      {"{adiabatic: true, primary_zone: {equivalence_ratio: 0.2, residence_time: 5 ms}}",
+       "firing.primary_zone.equivalence_ratio: equivalence_ratio = 0.2 is leaner than the whole mixture"},
+  };
+  for (const Bad& b : bad) {
+    try {
+      (void)run_case(parse_case(head + "firing: " + b.firing + "\nreport: {reference_o2: 3 %}\n", "t.yaml"),
+                     builtin_species());
+      ADD_FAILURE() << "accepted: " << b.firing;
+    } catch (const units::InputError& error) {
+      EXPECT_NE(std::string(error.what()).find(b.message), std::string::npos) << error.what();
+    }
+  }
+}
+
+// Wrong if the run JSON lacked the primary zone or the zones in order (primary, hold, cooling).
+TEST(PostFlameStage, RunJsonNamesTheZones) {
+  const auto run = testing::run_stackbound({"run", example("gas_turbine.yaml"), "--format", "json"});
+  ASSERT_EQ(run.exit_code, 0) << run.err;
+  const nlohmann::json post = nlohmann::json::parse(run.out).at("post_flame");
+  ASSERT_EQ(post.at("zones").size(), 3u);
+  EXPECT_EQ(post.at("zones")[0].at("zone"), "primary");
+  EXPECT_EQ(post.at("zones")[1].at("zone"), "hold");
+  EXPECT_EQ(post.at("zones")[2].at("zone"), "cooling");
+  EXPECT_GT(post.at("primary_zone").at("temperature_K").get<double>(), 1800.0);
+  EXPECT_TRUE(is_close(post.at("primary_zone").at("residence_time_s").get<double>(), 0.008, 1e-15));
 }
 
 }  // namespace
