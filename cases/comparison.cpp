@@ -65,8 +65,13 @@ Report comparison_document(const Comparison& c) {
   const std::vector<double>& first = c.values.front();
   for (std::size_t k = 0; k < c.columns.size(); ++k) {
     std::vector<std::string> row{c.columns[k].header};
-    for (const auto& values : c.values) row.push_back(fmt::format("{:.5g}", values[k]));
+    const auto cell = [&](double value) { return is_missing(c.columns[k], value) ? std::string("-") : fmt::format("{:.5g}", value); };
+    for (const auto& values : c.values) row.push_back(cell(values[k]));
     for (std::size_t i = 1; i < c.values.size(); ++i) {
+      if (is_missing(c.columns[k], c.values[i][k]) || is_missing(c.columns[k], first[k])) {
+        row.insert(row.end(), {"-", "-"});
+        continue;
+      }
       row.push_back(fmt::format("{:+.4g}", c.values[i][k] - first[k]));
       const auto rel = relative_difference(c.values[i][k], first[k]);
       row.push_back(rel ? fmt::format("{:+.2f}", *rel * 100.0) : "-");

@@ -29,6 +29,9 @@ struct ReportPlot {
   std::string x_label;  // with unit, e.g. "excess air [%]"
   std::string y_label;
   std::vector<PlotSeries> series;
+  // Logarithmic y axis (decades): for figures spanning orders of magnitude, such as an estimate
+  // beside its bound. Values <= 0 are then not drawn.
+  bool log_y = false;
 };
 
 struct Report {

@@ -24,6 +24,15 @@ std::vector<MetricColumn> run_metric_columns(const RunResult& r, bool reference_
     columns.push_back({p.name + "_kg_per_h", p.name + " bound [kg/h]"});
     columns.push_back({p.name + "_lb_per_MMBtu", p.name + " bound [lb/MMBtu]"});
   }
+  for (const PollutantBound& p : r.emissions.pollutants) {
+    if (!post_flame_covers(p.name)) continue;
+    for (const std::string_view kind : {"estimate", "ceiling"}) {
+      const std::string key = fmt::format("{}_{}", p.name, kind);
+      columns.push_back({key + "_ppmvd_at_ref_o2", fmt::format("{} {} [ppmvd {}]", p.name, kind, ref), true});
+      columns.push_back({key + "_mg_per_Nm3_at_ref_o2", fmt::format("{} {} [mg/Nm3 {}]", p.name, kind, ref), true});
+      columns.push_back({key + "_kg_per_h", fmt::format("{} {} [kg/h]", p.name, kind), true});
+    }
+  }
   return columns;
 }
 
@@ -43,6 +52,19 @@ std::vector<double> run_metric_values(const RunResult& r) {
     values.push_back(e.mg_per_Nm3_at_reference.result.value());
     values.push_back(e.mass_rate.value() * 3600.0);
     values.push_back(e.method19.lb_per_MMBtu());
+  }
+  for (const PollutantBound& p : r.emissions.pollutants) {
+    if (!post_flame_covers(p.name)) continue;
+    for (const std::optional<PollutantFigure>* figure : {&p.estimate, &p.ceiling}) {
+      if (!*figure) {
+        values.insert(values.end(), 3, kMissingFigure);
+        continue;
+      }
+      const emissions::StackEmission& e = (*figure)->emission;
+      values.push_back(e.ppmvd_at_reference.value());
+      values.push_back(e.mg_per_Nm3_at_reference.result.value());
+      values.push_back(e.mass_rate.value() * 3600.0);
+    }
   }
   return values;
 }

@@ -186,6 +186,10 @@ PostFlame post_flame_stage(const CaseDefinition& definition, const ResolvedCase&
   return post;
 }
 
+bool post_flame_covers(std::string_view pollutant) {
+  return pollutant == "NO" || pollutant == "NOx" || pollutant == "CO";
+}
+
 std::optional<double> PostFlame::estimate_wet_fraction(std::string_view pollutant) const {
   if (pollutant == "CO") return co ? std::optional<double>(co->co_mole_fraction) : std::nullopt;
   if (pollutant != "NO" && pollutant != "NOx") return std::nullopt;

@@ -91,6 +91,9 @@ struct PostFlame {
   [[nodiscard]] std::optional<double> ceiling_wet_fraction(std::string_view pollutant) const;
 };
 
+// True for the pollutants the stage gives an estimate and a ceiling for: NO, NOx and CO.
+[[nodiscard]] bool post_flame_covers(std::string_view pollutant);
+
 // Runs the stage on the firing state. Errors name "firing.residence_time", "firing.primary_zone",
 // "post_flame.cooling_to", "post_flame" or "fuel.nitrogen_conversion"; core::ConvergenceError if a path equilibrium fails.
 PostFlame post_flame_stage(const CaseDefinition& definition, const ResolvedCase& resolved, const FiringState& fired);

@@ -14,6 +14,11 @@ nlohmann::json comparison_json(const Comparison& c) {
     for (std::size_t k = 0; k < c.columns.size(); ++k) {
       const double value = c.values[i][k];
       const double first = c.values[0][k];
+      if (is_missing(c.columns[k], value) || is_missing(c.columns[k], first)) {
+        values[c.columns[k].key] = is_missing(c.columns[k], value) ? nlohmann::json(nullptr) : nlohmann::json(value);
+        differences[c.columns[k].key] = {{"absolute", nullptr}, {"relative", nullptr}};
+        continue;
+      }
       values[c.columns[k].key] = value;
       const auto rel = relative_difference(value, first);
       differences[c.columns[k].key] = {{"absolute", value - first}, {"relative", rel ? nlohmann::json(*rel) : nlohmann::json(nullptr)}};

@@ -66,77 +66,109 @@ std::string escape_html(const std::string& text) {
   return out;
 }
 
-std::string render_svg_plot(const ReportPlot& plot, int width_px, int height_px) {
-  Range xr;
-  Range yr;
-  for (const PlotSeries& s : plot.series) {
-    for (std::size_t i = 0; i < std::min(s.x.size(), s.y.size()); ++i) {
-      if (std::isfinite(s.x[i]) && std::isfinite(s.y[i])) {
-        xr.include(s.x[i]);
-        yr.include(s.y[i]);
-      }
-    }
-  }
-  xr = padded(xr);
-  yr = padded(yr);
-  const double left = 78;
-  const double right = 16;
-  const double top = 34;
-  const double bottom = 52 + 18.0 * static_cast<double>(plot.series.size() > 1 ? plot.series.size() : 0);
-  const double plot_w = width_px - left - right;
-  const double plot_h = height_px - top - bottom;
-  const auto px = [&](double x) { return left + (x - xr.low) / (xr.high - xr.low) * plot_w; };
-  const auto py = [&](double y) { return top + plot_h - (y - yr.low) / (yr.high - yr.low) * plot_h; };
+namespace {
 
-  std::string svg = fmt::format(
-      R"(<svg xmlns="http://www.w3.org/2000/svg" width="{0}" height="{1}" viewBox="0 0 {0} {1}" role="img" aria-label="{2}">)"
-      "\n",
-      width_px, height_px, escape_html(plot.title));
-  svg += fmt::format(R"(<text x="{}" y="18" font-size="14" font-weight="bold" text-anchor="middle">{}</text>)" "\n",
-                     left + plot_w / 2, escape_html(plot.title));
-  svg += fmt::format(R"(<rect x="{}" y="{}" width="{}" height="{}" fill="none" stroke="#444"/>)" "\n", left, top, plot_w,
-                     plot_h);
-  const double xstep = tick_step(xr.high - xr.low, 6);
-  for (double t = std::ceil(xr.low / xstep) * xstep; t <= xr.high + xstep * 1e-9; t += xstep) {
-    svg += fmt::format(R"(<line x1="{0:.1f}" y1="{1}" x2="{0:.1f}" y2="{2}" stroke="#ddd"/>)"
-                       R"(<text x="{0:.1f}" y="{3}" font-size="11" text-anchor="middle">{4}</text>)" "\n",
-                       px(t), top, top + plot_h, top + plot_h + 15, tick_label(t, xstep));
-  }
-  const double ystep = tick_step(yr.high - yr.low, 5);
-  for (double t = std::ceil(yr.low / ystep) * ystep; t <= yr.high + ystep * 1e-9; t += ystep) {
+// The y value as plotted: its decimal logarithm on a log axis (NaN where not positive).
+double plotted_y(const ReportPlot& plot, double y) {
+  if (!plot.log_y) return y;
+  return y > 0.0 ? std::log10(y) : std::numeric_limits<double>::quiet_NaN();
+}
+
+struct Frame {
+  double left = 78, right = 16, top = 34, bottom = 52;
+  double width = 0, height = 0;  // of the plotting area
+  Range x, y;                    // y as plotted
+  [[nodiscard]] double px(double v) const { return left + (v - x.low) / (x.high - x.low) * width; }
+  [[nodiscard]] double py(double v) const { return top + height - (v - y.low) / (y.high - y.low) * height; }
+};
+
+std::string y_ticks(const ReportPlot& plot, const Frame& f) {
+  std::string svg;
+  const double step = plot.log_y ? std::max(1.0, std::ceil((f.y.high - f.y.low) / 6.0)) : tick_step(f.y.high - f.y.low, 5);
+  for (double t = std::ceil(f.y.low / step) * step; t <= f.y.high + step * 1e-9; t += step) {
+    const std::string label = plot.log_y ? fmt::format("{:g}", std::pow(10.0, t)) : tick_label(t, step);
     svg += fmt::format(R"(<line x1="{1}" y1="{0:.1f}" x2="{2}" y2="{0:.1f}" stroke="#ddd"/>)"
                        R"(<text x="{3}" y="{4:.1f}" font-size="11" text-anchor="end">{5}</text>)" "\n",
-                       py(t), left, left + plot_w, left - 6, py(t) + 4, tick_label(t, ystep));
+                       f.py(t), f.left, f.left + f.width, f.left - 6, f.py(t) + 4, label);
   }
-  svg += fmt::format(R"(<text x="{}" y="{}" font-size="12" text-anchor="middle">{}</text>)" "\n", left + plot_w / 2,
-                     top + plot_h + 34, escape_html(plot.x_label));
+  return svg;
+}
+
+std::string axes(const ReportPlot& plot, const Frame& f) {
+  std::string svg = fmt::format(R"(<text x="{}" y="18" font-size="14" font-weight="bold" text-anchor="middle">{}</text>)" "\n",
+                                f.left + f.width / 2, escape_html(plot.title));
+  svg += fmt::format(R"(<rect x="{}" y="{}" width="{}" height="{}" fill="none" stroke="#444"/>)" "\n", f.left, f.top, f.width,
+                     f.height);
+  const double xstep = tick_step(f.x.high - f.x.low, 6);
+  for (double t = std::ceil(f.x.low / xstep) * xstep; t <= f.x.high + xstep * 1e-9; t += xstep) {
+    svg += fmt::format(R"(<line x1="{0:.1f}" y1="{1}" x2="{0:.1f}" y2="{2}" stroke="#ddd"/>)"
+                       R"(<text x="{0:.1f}" y="{3}" font-size="11" text-anchor="middle">{4}</text>)" "\n",
+                       f.px(t), f.top, f.top + f.height, f.top + f.height + 15, tick_label(t, xstep));
+  }
+  svg += y_ticks(plot, f);
+  svg += fmt::format(R"(<text x="{}" y="{}" font-size="12" text-anchor="middle">{}</text>)" "\n", f.left + f.width / 2,
+                     f.top + f.height + 34, escape_html(plot.x_label));
   svg += fmt::format(R"svg(<text x="16" y="{0}" font-size="12" text-anchor="middle" transform="rotate(-90 16 {0})">{1}</text>)svg"
                      "\n",
-                     top + plot_h / 2, escape_html(plot.y_label));
+                     f.top + f.height / 2, escape_html(plot.y_label + (plot.log_y ? " (log scale)" : "")));
+  return svg;
+}
+
+std::string series_lines(const ReportPlot& plot, const Frame& f) {
+  std::string svg;
   for (std::size_t k = 0; k < plot.series.size(); ++k) {
     const PlotSeries& s = plot.series[k];
     const char* colour = kColours[k % kColours.size()];
     std::string points;
     std::size_t shown = 0;
     for (std::size_t i = 0; i < std::min(s.x.size(), s.y.size()); ++i) {
-      if (!std::isfinite(s.x[i]) || !std::isfinite(s.y[i])) continue;
-      points += fmt::format("{:.1f},{:.1f} ", px(s.x[i]), py(s.y[i]));
-      svg += fmt::format(R"(<circle cx="{:.1f}" cy="{:.1f}" r="2.5" fill="{}"/>)", px(s.x[i]), py(s.y[i]), colour);
+      const double y = plotted_y(plot, s.y[i]);
+      if (!std::isfinite(s.x[i]) || !std::isfinite(y)) continue;
+      points += fmt::format("{:.1f},{:.1f} ", f.px(s.x[i]), f.py(y));
+      svg += fmt::format(R"(<circle cx="{:.1f}" cy="{:.1f}" r="2.5" fill="{}"/>)", f.px(s.x[i]), f.py(y), colour);
       ++shown;
     }
     if (shown > 1) svg += fmt::format(R"(<polyline fill="none" stroke="{}" stroke-width="2" points="{}"/>)", colour, points);
     svg += "\n";
     if (plot.series.size() > 1) {
-      const double ly = top + plot_h + 50 + 18.0 * static_cast<double>(k);
+      const double ly = f.top + f.height + 50 + 18.0 * static_cast<double>(k);
       svg += fmt::format(R"(<line x1="{0}" y1="{1}" x2="{2}" y2="{1}" stroke="{3}" stroke-width="2"/>)"
                          R"(<text x="{4}" y="{5}" font-size="11">{6}</text>)" "\n",
-                         left, ly, left + 24, colour, left + 30, ly + 4,
+                         f.left, ly, f.left + 24, colour, f.left + 30, ly + 4,
                          escape_html(shown == 0 ? s.name + " (no data)" : s.name));
     } else if (shown == 0) {
       svg += fmt::format(R"(<text x="{}" y="{}" font-size="12" text-anchor="middle">(no data)</text>)" "\n",
-                         left + plot_w / 2, top + plot_h / 2);
+                         f.left + f.width / 2, f.top + f.height / 2);
     }
   }
+  return svg;
+}
+
+}  // namespace
+
+std::string render_svg_plot(const ReportPlot& plot, int width_px, int height_px) {
+  Frame f;
+  for (const PlotSeries& s : plot.series) {
+    for (std::size_t i = 0; i < std::min(s.x.size(), s.y.size()); ++i) {
+      const double y = plotted_y(plot, s.y[i]);
+      if (std::isfinite(s.x[i]) && std::isfinite(y)) {
+        f.x.include(s.x[i]);
+        f.y.include(y);
+      }
+    }
+  }
+  f.x = padded(f.x);
+  f.y = padded(f.y);
+  if (plot.log_y) f.y = {std::floor(f.y.low), std::max(std::ceil(f.y.high), std::floor(f.y.low) + 1.0)};
+  f.bottom += 18.0 * static_cast<double>(plot.series.size() > 1 ? plot.series.size() : 0);
+  f.width = width_px - f.left - f.right;
+  f.height = height_px - f.top - f.bottom;
+  std::string svg = fmt::format(
+      R"(<svg xmlns="http://www.w3.org/2000/svg" width="{0}" height="{1}" viewBox="0 0 {0} {1}" role="img" aria-label="{2}">)"
+      "\n",
+      width_px, height_px, escape_html(plot.title));
+  svg += axes(plot, f);
+  svg += series_lines(plot, f);
   svg += "</svg>\n";
   return svg;
 }

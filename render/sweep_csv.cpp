@@ -54,9 +54,8 @@ void SweepCsvWriter::write_header(const RunResult* first) {
   if (first != nullptr) {
     const bool reference_o2_varies = std::any_of(
         vary_.begin(), vary_.end(), [](const VarySpec& v) { return v.parameter == SweepParameter::reference_o2; });
-    const std::vector<MetricColumn> columns = run_metric_columns(*first, reference_o2_varies);
-    for (const MetricColumn& column : columns) line += "," + csv_cell(column.header);
-    metric_count_ = columns.size();
+    columns_ = run_metric_columns(*first, reference_o2_varies);
+    for (const MetricColumn& column : columns_) line += "," + csv_cell(column.header);
   }
   line += ",error\n";
   sink_(line);
@@ -74,6 +73,10 @@ void SweepCsvWriter::write_row(const SweepPoint& point) {
     const std::vector<double> values = run_metric_values(*point.result);
     for (std::size_t m = 0; m < values.size(); ++m) {
       const double value = values[m];
+      if (is_missing(columns_[m], value)) {
+        line.push_back(',');  // an estimate or ceiling this point does not have: an empty cell
+        continue;
+      }
       if (!std::isfinite(value)) {
         throw NonFiniteFigure(fmt::format("sweep point {}: figure {} of the row is not finite", point.index + 1, m + 1));
       }
@@ -85,7 +88,7 @@ void SweepCsvWriter::write_row(const SweepPoint& point) {
     }
     fmt::format_to(std::back_inserter(line), ",\n");
   } else {
-    fmt::format_to(std::back_inserter(line), ",failed{},{}\n", std::string(metric_count_, ','), csv_cell(point.error));
+    fmt::format_to(std::back_inserter(line), ",failed{},{}\n", std::string(columns_.size(), ','), csv_cell(point.error));
   }
   sink_(std::string_view(line.data(), line.size()));
 }

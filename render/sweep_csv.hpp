@@ -9,6 +9,7 @@
 #include <vector>
 
 #include "stackbound/cases/pipeline.hpp"
+#include "stackbound/cases/run_metrics.hpp"
 #include "stackbound/cases/sweep.hpp"
 
 namespace stackbound::render {
@@ -30,7 +31,7 @@ class SweepCsvWriter {
   Sink sink_;
   const std::vector<cases::VarySpec>& vary_;
   bool header_written_ = false;
-  std::size_t metric_count_ = 0;
+  std::vector<cases::MetricColumn> columns_;  // of the first point that ran
   std::vector<cases::SweepPoint> pending_;
 };
 

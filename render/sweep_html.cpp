@@ -23,7 +23,9 @@ void SweepHtmlCollector::add(const SweepPoint& point) {
       reference_o2_ = varied ? "reference O2" : emissions::percent_text(point.result->emissions.reference_o2_dry) + " % O2";
     }
     const std::vector<double> values = run_metric_values(*point.result);
-    for (std::size_t k = 0; k < values.size() && k < columns_.size(); ++k) row.metrics[columns_[k].key] = values[k];
+    for (std::size_t k = 0; k < values.size() && k < columns_.size(); ++k) {
+      if (!is_missing(columns_[k], values[k])) row.metrics[columns_[k].key] = values[k];
+    }
   } else {
     ++failed_;
   }
@@ -43,10 +45,12 @@ Report SweepHtmlCollector::document(const CaseDefinition& definition) const {
   const auto plot = [&](const std::string& title, const std::string& y_label, const std::string& key) {
     return ReportPlot{title, x_label, y_label, series_for(key)};
   };
-  report.plots.push_back(plot(fmt::format("CO bound at {}", reference_o2_), fmt::format("CO [ppmvd @ {}]", reference_o2_),
-                              "CO_ppmvd_at_ref_o2"));
-  report.plots.push_back(plot(fmt::format("NO bound at {}", reference_o2_), fmt::format("NO [ppmvd @ {}]", reference_o2_),
-                              "NO_ppmvd_at_ref_o2"));
+  for (const std::string pollutant : {"CO", "NO", "NOx"}) {
+    const bool reported = std::any_of(columns_.begin(), columns_.end(), [&](const MetricColumn& c) {
+      return c.key == pollutant + "_estimate_ppmvd_at_ref_o2";
+    });
+    if (reported) report.plots.push_back(three_figure_plot(pollutant, x_label));
+  }
   report.plots.push_back(plot("Firing (flame) temperature", "temperature [K]", "firing_temperature_K"));
   report.plots.push_back(plot("Flue-gas O2", "O2 [% dry]", "flue_o2_dry_percent"));
   report.tables.push_back(points_table());
@@ -81,14 +85,29 @@ ReportTable SweepHtmlCollector::points_table() const {
   return table;
 }
 
-// One series per combination of the parameters after the first (at most 6 lines a plot).
-std::vector<PlotSeries> SweepHtmlCollector::series_for(const std::string& key) const {
+// Estimate, ceiling and bound of one pollutant at the reference O2 together, on a log axis (they can lie
+// orders of magnitude apart); with a second parameter, the lines of its first two values only.
+ReportPlot SweepHtmlCollector::three_figure_plot(const std::string& pollutant, const std::string& x_label) const {
+  ReportPlot plot{fmt::format("{}: estimate, ceiling and equilibrium bound at {}", pollutant, reference_o2_), x_label,
+                  fmt::format("{} [ppmvd @ {}]", pollutant, reference_o2_), {}, true};
+  for (const std::string kind : {"estimate", "ceiling", "bound"}) {
+    const std::string key = kind == "bound" ? pollutant + "_ppmvd_at_ref_o2" : pollutant + "_" + kind + "_ppmvd_at_ref_o2";
+    std::vector<PlotSeries> lines = series_for(key, pollutant + " " + kind);
+    if (lines.size() > 2) lines.resize(2);
+    for (PlotSeries& s : lines) plot.series.push_back(std::move(s));
+  }
+  return plot;
+}
+
+// One series per combination of the parameters after the first (at most 6 lines a plot), named
+// `name` and the values of those parameters; "" names it by the key's pollutant.
+std::vector<PlotSeries> SweepHtmlCollector::series_for(const std::string& key, const std::string& name_prefix) const {
   std::map<std::vector<double>, PlotSeries> by_rest;
   for (const Row& row : rows_) {
     const std::vector<double> rest(row.values.begin() + 1, row.values.end());
     auto [it, inserted] = by_rest.try_emplace(rest);
     if (inserted) {
-      std::string name = key.substr(0, key.find('_'));
+      std::string name = name_prefix.empty() ? key.substr(0, key.find('_')) : name_prefix;
       for (std::size_t k = 1; k < vary_.size(); ++k) {
         name += fmt::format(", {} = {:.4g} {}", sweep_parameter_name(vary_[k].parameter),
                             sweep_parameter_display(vary_[k].parameter, row.values[k]),

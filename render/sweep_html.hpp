@@ -34,7 +34,8 @@ class SweepHtmlCollector {
     std::string error;
   };
 
-  std::vector<cases::PlotSeries> series_for(const std::string& key) const;
+  std::vector<cases::PlotSeries> series_for(const std::string& key, const std::string& name_prefix = "") const;
+  cases::ReportPlot three_figure_plot(const std::string& pollutant, const std::string& x_label) const;
   cases::ReportTable points_table() const;
 
   const std::vector<cases::VarySpec>& vary_;

@@ -281,5 +281,24 @@ TEST(Compare, DifferencesAreAgainstTheFirstCase) {
   EXPECT_FALSE(json["cautions"].empty());
 }
 
+// Wrong if compare left out the kinetic estimate and ceiling beside the bound, or printed other
+// numbers for them than a run of the same case.
+TEST(Compare, CarriesTheEstimateAndTheCeiling) {
+  const auto run = run_stackbound({"compare", example("gas_boiler.yaml"), example("gas_turbine.yaml"), "--format", "json"});
+  ASSERT_EQ(run.exit_code, 0) << run.err;
+  const nlohmann::json json = nlohmann::json::parse(run.out);
+  const RunResult turbine = run_case(load_case(example("gas_turbine.yaml")), builtin_species());
+  for (const PollutantBound& p : turbine.emissions.pollutants) {
+    const nlohmann::json& values = json["cases"][1]["values"];
+    ASSERT_TRUE(values.contains(p.name + "_estimate_ppmvd_at_ref_o2")) << p.name;
+    EXPECT_TRUE(is_close(values[p.name + "_estimate_ppmvd_at_ref_o2"].get<double>(),
+                         p.estimate->emission.ppmvd_at_reference.value(), 1e-12, 1e-300))
+        << p.name;
+    EXPECT_TRUE(is_close(values[p.name + "_ceiling_kg_per_h"].get<double>(), p.ceiling->emission.mass_rate.value() * 3600.0,
+                         1e-12, 1e-300))
+        << p.name;
+  }
+}
+
 }  // namespace
 }  // namespace stackbound::cases

@@ -3,6 +3,8 @@
 
 #include <gtest/gtest.h>
 
+#include "stackbound/render/svg_plot.hpp"
+
 #include <string>
 
 #include "stackbound/render/csv_cell.hpp"
@@ -62,6 +64,25 @@ TEST(Formats, RenderReportPicksTheNamedFormat) {
   EXPECT_EQ(render_report(report, "csv"), render_csv(report));
   EXPECT_EQ(render_report(report, "html"), render_html(report));
   EXPECT_EQ(render_report(report, "text"), render_text(report));
+}
+
+// Wrong if a log axis did not label decades, drew a value <= 0 (it has no logarithm), or placed a
+// decade above the next: an estimate 1000 times below its bound would then vanish into the axis.
+TEST(SvgPlot, LogAxisLabelsDecadesAndSkipsValuesThatAreNotPositive) {
+  cases::ReportPlot plot{"t", "x [%]", "NO [ppmvd]", {{"NO estimate", {1, 2, 3, 4}, {0.2, 3.0, 0.0, 800.0}}}, true};
+  const std::string svg = render_svg_plot(plot);
+  for (const char* label : {">0.1<", ">1<", ">10<", ">100<", ">1000<", "(log scale)"}) {
+    EXPECT_NE(svg.find(label), std::string::npos) << label;
+  }
+  std::size_t circles = 0;
+  for (std::size_t at = svg.find("<circle"); at != std::string::npos; at = svg.find("<circle", at + 1)) ++circles;
+  EXPECT_EQ(circles, 3U);
+  const auto y_of = [&](const char* label) {
+    const std::size_t at = svg.rfind(" y=\"", svg.find(label));
+    return std::stod(svg.substr(at + 4));
+  };
+  EXPECT_GT(y_of(">1<"), y_of(">10<"));  // SVG y grows downwards
+  EXPECT_NEAR(y_of(">1<") - y_of(">10<"), y_of(">10<") - y_of(">100<"), 0.2);
 }
 
 }  // namespace

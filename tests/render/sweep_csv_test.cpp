@@ -12,6 +12,8 @@
 #include "stackbound/cases/species_file.hpp"
 #include "stackbound/render/sweep_csv.hpp"
 
+#include <fmt/format.h>
+
 namespace stackbound::render {
 namespace {
 
@@ -79,6 +81,89 @@ TEST(SweepCsv, AReferenceO2SweepNamesNoSingleO2InItsHeader) {
   writer.finish();
   EXPECT_NE(out.find("CO bound [ppmvd @ reference O2]"), std::string::npos) << out;
   EXPECT_EQ(out.find("@ 3 % O2"), std::string::npos) << out;
+}
+
+// Splits a CSV line into its cells (quoted cells unquoted; the rows tested here double no quotes).
+std::vector<std::string> cells_of(const std::string& line) {
+  std::vector<std::string> cells(1);
+  bool quoted = false;
+  for (const char c : line) {
+    if (c == '"') {
+      quoted = !quoted;
+    } else if (c == ',' && !quoted) {
+      cells.emplace_back();
+    } else {
+      cells.back() += c;
+    }
+  }
+  return cells;
+}
+
+std::vector<std::string> data_rows(const std::string& text) {
+  std::vector<std::string> rows;
+  for (const std::string& line : lines_of(text)) {
+    if (!line.starts_with("#")) rows.push_back(line);
+  }
+  return rows;
+}
+
+// Wrong if a sweep row's estimate and ceiling columns were missing or held other numbers than the
+// run of the same point (the sweep would then not show what the report shows).
+TEST(SweepCsv, EstimateAndCeilingColumnsCarryTheRunsFigures) {
+  CaseDefinition definition = load_case(std::string(STACKBOUND_SOURCE_DIR) + "/cases/examples/gas_boiler.yaml");
+  const std::vector<VarySpec> vary{parse_vary("excess_air=10%:20%:2")};
+  apply_parameter(definition, vary[0].parameter, 0.10);
+  const RunResult run = run_case(definition, builtin_species());
+  std::string out;
+  SweepCsvWriter writer([&out](std::string_view text) { out += text; }, vary);
+  writer.add(SweepPoint{0, {0.10}, run, ""});
+  writer.finish();
+  const std::vector<std::string> rows = data_rows(out);
+  ASSERT_EQ(rows.size(), 2U);
+  const std::vector<std::string> header = cells_of(rows[0]);
+  const std::vector<std::string> values = cells_of(rows[1]);
+  ASSERT_EQ(header.size(), values.size());
+  const auto cell = [&](const std::string& title) -> std::string {
+    for (std::size_t i = 0; i < header.size(); ++i) {
+      if (header[i] == title) return values[i];
+    }
+    return "(no column " + title + ")";
+  };
+  for (const PollutantBound& p : run.emissions.pollutants) {
+    ASSERT_TRUE(p.estimate && p.ceiling) << p.name;
+    EXPECT_DOUBLE_EQ(std::stod(cell(p.name + " estimate [ppmvd @ 3 % O2]")), std::stod(fmt::format(
+        "{:.8g}", p.estimate->emission.ppmvd_at_reference.value()))) << p.name;
+    EXPECT_DOUBLE_EQ(std::stod(cell(p.name + " ceiling [kg/h]")),
+                     std::stod(fmt::format("{:.8g}", p.ceiling->emission.mass_rate.value() * 3600.0))) << p.name;
+  }
+}
+
+// Wrong if a point without kinetics (the products lack NO, so no thermal NO) wrote NaN, failed, or
+// shifted its row instead of leaving its estimate and ceiling cells empty.
+TEST(SweepCsv, AnEstimateAPointDoesNotHaveIsAnEmptyCell) {
+  CaseDefinition definition = load_case(std::string(STACKBOUND_SOURCE_DIR) + "/cases/examples/gas_boiler.yaml");
+  definition.firing.species = {"CO2", "H2O", "N2", "O2", "CO", "Ar"};
+  const std::vector<VarySpec> vary{parse_vary("excess_air=10%:20%:2")};
+  const RunResult run = run_case(definition, builtin_species());
+  ASSERT_FALSE(run.post_flame.thermal_no.has_value());
+  std::string out;
+  SweepCsvWriter writer([&out](std::string_view text) { out += text; }, vary);
+  writer.add(SweepPoint{0, {0.10}, run, ""});
+  writer.finish();
+  const std::vector<std::string> rows = data_rows(out);
+  ASSERT_EQ(rows.size(), 2U);
+  const std::vector<std::string> header = cells_of(rows[0]);
+  const std::vector<std::string> values = cells_of(rows[1]);
+  ASSERT_EQ(header.size(), values.size());
+  std::size_t empty = 0;
+  for (std::size_t i = 0; i < header.size(); ++i) {
+    if (header[i].starts_with("NO estimate") || header[i].starts_with("NO ceiling")) {
+      EXPECT_EQ(values[i], "") << header[i];
+      ++empty;
+    }
+    EXPECT_EQ(values[i].find("nan"), std::string::npos) << header[i];
+  }
+  EXPECT_EQ(empty, 6U);
 }
 
 }  // namespace
