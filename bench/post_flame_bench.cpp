@@ -1,5 +1,5 @@
-// Cost of the post-flame kinetics (budget: thermal NO + CO burnout along a default path <= 200 us
-// median per case, one core). A case: 20 ms hold at the firing temperature, then linear cooling to
+// Cost of the post-flame kinetics (budget: the post-flame stage with default settings <= 200 us median
+// per case, one core). A case: 20 ms hold at the firing temperature, then linear cooling to
 // 1000 K over 1 s in 20 steps (21 equilibrium solves, the first cold), thermal NO and CO burnout along
 // it. The firing temperature cycles over 1800-2000 K so that no state is reused. Feed: methane with
 // dry air at 15 % excess air, an invented demonstration mixture. Median:
@@ -8,6 +8,8 @@
 
 #include <vector>
 
+#include "stackbound/cases/case_file.hpp"
+#include "stackbound/cases/pipeline.hpp"
 #include "stackbound/cases/species_file.hpp"
 #include "stackbound/core/co_burnout.hpp"
 #include "stackbound/core/element_amounts.hpp"
@@ -65,5 +67,20 @@ void BM_PostFlameRateModelsOnly(benchmark::State& state) {
   }
 }
 BENCHMARK(BM_PostFlameRateModelsOnly)->Unit(benchmark::kMicrosecond);
+
+// The post-flame stage of a case run as the gas-turbine example states it: a primary zone (an HP solve
+// and its thermal NO), then the hold and the default cooling path (the same as above) on the mixed gas.
+void BM_PostFlameStageGasTurbineWithPrimaryZone(benchmark::State& state) {
+  namespace sb = stackbound::cases;
+  const sb::CaseDefinition definition =
+      sb::load_case(std::string(STACKBOUND_SOURCE_DIR) + "/cases/examples/gas_turbine.yaml");
+  const sb::ResolvedCase resolved = sb::resolve_stage(definition, sb::builtin_species());
+  const sb::FiringState fired = sb::fire_stage(definition.firing, resolved, sb::builtin_species());
+  for (auto _ : state) {
+    const sb::PostFlame post = sb::post_flame_stage(definition, resolved, fired);
+    keep(post.primary_zone->no_carried);
+  }
+}
+BENCHMARK(BM_PostFlameStageGasTurbineWithPrimaryZone)->Unit(benchmark::kMicrosecond);
 
 }  // namespace
