@@ -331,6 +331,24 @@ struct ParsedReactants {
   std::vector<Piece> pieces;  // the term of each amount
 };
 
+// An amount below 1e-30 of the feed's total is refused: the element balance (held to 1e-10 of each
+// element's amount) cannot place it beside the rest, and no plant stream is that pure (common
+// practice, no source). Down to that share the solver converges (tests/core/equilibrium_trace_test.cpp).
+constexpr double kSmallestShare = 1e-30;
+
+void refuse_vanishing_shares(const Notation& n, const ParsedReactants& parsed) {
+  double total = 0.0;
+  for (const SpeciesAmount& amount : parsed.amounts) total += amount.moles;
+  for (std::size_t i = 0; i < parsed.amounts.size(); ++i) {
+    const double share = parsed.amounts[i].moles / total;
+    if (share >= kSmallestShare) continue;
+    refuse(n, parsed.pieces[i],
+           fmt::format("{} is {:.3g} of the feed's {:g} mol; amounts below {:g} of the total cannot be balanced "
+                       "beside the rest: leave the species out or raise its amount",
+                       parsed.amounts[i].formula, share, total, kSmallestShare));
+  }
+}
+
 ParsedReactants read_reactants(std::string_view text, std::string_view field);
 
 bool is_blank(char c) { return kBlanks.find(c) != std::string_view::npos; }
@@ -396,6 +414,7 @@ ParsedReactants read_reactants(std::string_view text, std::string_view field) {
     parsed.amounts.push_back(std::move(amount));
     parsed.pieces.push_back(piece);
   }
+  refuse_vanishing_shares(n, parsed);
   return parsed;
 }
 

@@ -367,6 +367,9 @@ EquilibriumResult EquilibriumSolver::solve_tp(const ElementAmounts& b, units::Te
   try {
     return EquilibriumWork::solve(*this, b, temperature_K, pressure_Pa, warm_start);
   } catch (const ConvergenceError&) {
+    if (std::optional<EquilibriumResult> rescued = solve_by_trace_continuation(b, temperature_K, pressure_Pa)) {
+      return *std::move(rescued);
+    }
     // A restricted product list may be unable to reach the feed's element proportions with
     // non-negative amounts; that is bad input, not a numerical failure.
     std::array<bool, kElementCount> active{};

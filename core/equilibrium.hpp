@@ -19,6 +19,7 @@
 #include <cstddef>
 #include <cstdint>
 #include <memory>
+#include <optional>
 #include <stdexcept>
 #include <string>
 #include <string_view>
@@ -151,6 +152,13 @@ class EquilibriumSolver {
   };
   friend struct EquilibriumWork;
   void check_temperature(double temperature_K) const;
+  // A failed TP solve of a feed with trace elements (below 1e-6 of its atoms) retried by
+  // continuation: trace elements raised to 1e-6, then lowered a decade per solve, each solve
+  // warm-started from the last, down to the feed itself. Empty if there is no trace element or a
+  // step fails. Only called after a failure, so converged answers are untouched.
+  [[nodiscard]] std::optional<EquilibriumResult> solve_by_trace_continuation(const ElementAmounts& b,
+                                                                             double temperature_K,
+                                                                             double pressure_Pa) const;
   // Balance rows of every candidate made only of `active` elements; row_of[k] = row of element k or -1.
   void build_terms(const std::array<bool, kElementCount>& active, const std::array<int, kElementCount>& row_of,
                    std::vector<EquilibriumTerm>& gas, std::vector<EquilibriumTerm>& condensed) const;

@@ -110,6 +110,18 @@ TEST(ReactantNotation, TheFormerNameEqualsAmountFormIsRefusedWithItsRewriting) {
   EXPECT_CONTAINS(feed_error("CH4=1000 mol, O2=1"), "write \"1000 CH4 + O2\"");
 }
 
+// Wrong if an amount too small to balance beside the rest reached the solver (1e-300 O2 beside 1 mol
+// CH4 ran 200 iterations and failed to converge), or if the smallest accepted share (1e-30) were refused.
+TEST(ReactantNotation, AnAmountBelowTheSmallestShareOfTheFeedIsRefused) {
+  EXPECT_EQ(feed_error("CH4 + 1e-300 O2"),
+            "--feed = \"CH4 + 1e-300 O2\": term 2 \"1e-300 O2\" (column 7): O2 is 1e-300 of the feed's 1 mol; "
+            "amounts below 1e-30 of the total cannot be balanced beside the rest: leave the species out or raise "
+            "its amount; reactants are [moles] FORMULA terms joined by \"+\", e.g. \"CH4 + 2.4 O2 + 9.03 N2\"");
+  EXPECT_CONTAINS(feed_error("CH4 + 1e300 O2"), "CH4 is 1e-300 of the feed's 1e+300 mol");
+  EXPECT_EQ(feed_error("CH4 + 2 O2 + 1e-29 NO"), "");
+  EXPECT_EQ(feed_error("1e-300 CH4 + 2e-300 O2"), "");  // tiny amounts in ordinary proportions are fine
+}
+
 // Wrong if a coefficient glued to its formula were read (ambiguous: "2O2" vs a formula), or the hint
 // did not show the spaced form and where the term is.
 TEST(ReactantNotation, ACoefficientMustBeFollowedByABlank) {
