@@ -302,7 +302,9 @@ ReportSpec report_spec(const YamlField& report) {
   }
   if (const auto hours = report.optional("operating_hours")) {
     spec.operating_hours_h = hours->quantity_si(Dimension::time) / 3600.0;
-    if (!(spec.operating_hours_h > 0.0 && spec.operating_hours_h <= 8784.0)) hours->fail("must be between 0 h and 8784 h a year");
+    if (!(spec.operating_hours_h > 0.0 && spec.operating_hours_h <= 8784.0)) {
+      hours->fail("must be more than 0 h and at most 8784 h (a leap year)");
+    }
   }
   if (const auto limits = report.optional("limits")) {
     if (!limits->is_sequence()) limits->fail("expected a list of {pollutant, limit}");

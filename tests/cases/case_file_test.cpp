@@ -131,6 +131,8 @@ TEST(CaseFile, BrokenCasesFailWithLocatedMessagesAndNoOutputFile) {
       {"firing temperature outside the data", replaced(v, "1800 K", "4000 K"),
        ":9:16: temperature = 4000 K: outside the data range of product CO2 (200-3500 K)"},
       {"negative feed rate", replaced(v, "100 Nm3/h", "-100 Nm3/h"), ":5:14: fuel.feed_rate = \"-100 Nm3/h\": must be > 0"},
+      {"no operating hours", replaced(v, "  reference_o2: 3 %\n", "  reference_o2: 3 %\n  operating_hours: 0 h\n"),
+       ":12:20: report.operating_hours = \"0 h\": must be more than 0 h and at most 8784 h (a leap year)"},
   };
   const fs::path dir = scratch_dir();
   for (const BrokenCase& broken : cases) {
