@@ -45,7 +45,7 @@ def main(png_path):
     axes.semilogy(frame["vary_excess_air_percent"], frame["CO_mg_per_Nm3_at_ref_o2"], "s-", label="CO bound")
     axes.set_xlabel("excess air [%]")
     axes.set_ylabel("mg/Nm3, dry, at 3 % O2 (0 degC, 101.325 kPa)")
-    axes.set_title("Boiler HW-1 (invented): equilibrium bound at the adiabatic firing temperature")
+    axes.set_title("Boiler HW-1 (invented): equilibrium bounds, adiabatic firing")
     axes.grid(True, which="both", alpha=0.3)
     axes.legend()
     figure.text(0.01, 0.01, "Equilibrium bounds, not measurements; permits, regulators and licensed practice govern.",
