@@ -85,7 +85,6 @@ core::UltimateAnalysis ultimate_from_text(const FuelOptions& o) {
   return a;
 }
 
-
 FuelFile build_fuel(const FuelOptions& o, const core::SpeciesDatabase& db) {
   const int sources = !o.file.empty() + !o.gas.empty() + !o.preset.empty() + !o.ultimate.empty();
   if (sources != 1) {
