@@ -31,6 +31,17 @@ py::object to_python(const nlohmann::json& value) {
   throw std::logic_error("to_python: a JSON value of a kind our documents never hold");
 }
 
+std::string utf8_text(py::handle text, std::string_view field) {
+  Py_ssize_t size = 0;
+  const char* data = PyUnicode_AsUTF8AndSize(text.ptr(), &size);
+  if (data == nullptr) {
+    PyErr_Clear();
+    throw units::InputError(fmt::format("{}: the text has no UTF-8 form (it holds a lone surrogate); give valid Unicode text",
+                                        field));
+  }
+  return std::string(data, static_cast<std::size_t>(size));
+}
+
 namespace {
 
 std::string where(const std::string& path) { return path.empty() ? "(top level)" : path; }
@@ -58,7 +69,7 @@ YAML::Node to_yaml(py::handle value, const std::string& path, std::size_t depth)
                                         cases::kMaxYamlNesting));
   }
   if (value.is_none()) return YAML::Node(YAML::NodeType::Null);
-  if (py::isinstance<py::str>(value)) return YAML::Node(value.cast<std::string>());
+  if (py::isinstance<py::str>(value)) return YAML::Node(utf8_text(value, fmt::format("{}: {}", kDictOrigin, where(path))));
   if (py::isinstance<py::dict>(value)) {
     YAML::Node map(YAML::NodeType::Map);
     for (const auto& [key, item] : py::reinterpret_borrow<py::dict>(value)) {
@@ -66,7 +77,7 @@ YAML::Node to_yaml(py::handle value, const std::string& path, std::size_t depth)
         throw units::InputError(fmt::format("{}: {}: the key {} is a {}; keys are text", kDictOrigin, where(path),
                                             py::repr(key).cast<std::string>(), type_name(key)));
       }
-      const std::string name = key.cast<std::string>();
+      const std::string name = utf8_text(key, fmt::format("{}: {}", kDictOrigin, where(path)));
       map[name] = to_yaml(item, path.empty() ? name : path + "." + name, depth + 1);
     }
     return map;
@@ -86,7 +97,7 @@ YAML::Node to_yaml(py::handle value, const std::string& path, std::size_t depth)
 
 std::optional<std::string> option_text(py::handle value, std::string_view option) {
   if (value.is_none()) return std::nullopt;
-  if (py::isinstance<py::str>(value)) return value.cast<std::string>();
+  if (py::isinstance<py::str>(value)) return utf8_text(value, option);
   if (!py::isinstance<py::bool_>(value)) {
     if (const auto text = number_text(value)) return text;
   }
@@ -99,10 +110,11 @@ std::string option_text_or_empty(py::handle value, std::string_view option) {
 }
 
 std::optional<std::string> path_text(py::handle value) {
-  if (py::isinstance<py::str>(value)) return value.cast<std::string>();
-  const py::object fspath = py::module_::import("os").attr("fspath");
-  if (py::hasattr(value, "__fspath__")) return py::str(fspath(value)).cast<std::string>();
-  return std::nullopt;
+  if (py::isinstance<py::str>(value)) return utf8_text(value, "path");
+  if (!py::hasattr(value, "__fspath__")) return std::nullopt;
+  const py::object path = py::module_::import("os").attr("fspath")(value);
+  if (!py::isinstance<py::str>(path)) return std::nullopt;  // a bytes path
+  return utf8_text(path, "path");
 }
 
 }  // namespace stackbound::python

@@ -27,6 +27,10 @@ py::object to_python(const nlohmann::json& value);
 // than the YAML loader allows are a units::InputError naming the field path.
 YAML::Node to_yaml(py::handle value, const std::string& path = "", std::size_t depth = 0);
 
+// The UTF-8 text of a Python str; one that has no UTF-8 form (a lone surrogate) is a units::InputError
+// naming `field`.
+std::string utf8_text(py::handle text, std::string_view field);
+
 // The text of an option value: a str as is, a number as its shortest text; None as nothing. Anything
 // else is a units::InputError naming the option.
 std::optional<std::string> option_text(py::handle value, std::string_view option);

@@ -170,3 +170,25 @@ def test_the_module_version_is_the_projects():
     from conftest import SOURCE_DIR
     project = re.search(r"project\(stackbound VERSION (\S+)", (SOURCE_DIR / "CMakeLists.txt").read_text()).group(1)
     assert stackbound.__version__ == project
+
+
+def test_text_without_a_utf8_form_is_input_error_not_a_crash():
+    # Wrong if a lone surrogate (possible in a Python str, not in a file) escaped as another error.
+    case = copy.deepcopy(HEATER)
+    case["case"]["title"] = "boiler \ud800"
+    with pytest.raises(stackbound.InputError) as raised:
+        stackbound.run(case)
+    assert str(raised.value) == ("<dict>: case.title: the text has no UTF-8 form (it holds a lone surrogate); give "
+                                 "valid Unicode text")
+    with pytest.raises(stackbound.InputError):
+        stackbound.run("\ud800.yaml")
+
+
+@pytest.mark.parametrize("value", [float("nan"), float("inf"), -1e308, 10**400, True, None, [], {}],
+                         ids=repr)
+def test_any_value_of_a_field_is_a_result_or_input_error(value):
+    # Wrong if some Python value crashed the module or escaped as another exception type.
+    case = copy.deepcopy(HEATER)
+    case["firing"]["temperature"] = value
+    with pytest.raises(stackbound.InputError):
+        stackbound.run(case)
