@@ -319,10 +319,6 @@ void check_reference_o2(const CaseDefinition& definition, const std::optional<Ya
   throw units::InputError(fmt::format("{}: report.reference_o2 = \"preset\": {}", definition.origin, problem));
 }
 
-}  // namespace
-
-namespace {
-
 // Reads the case from its root mapping; `loaded` holds the source map `root` records into.
 void read_case(const YamlField& root, const std::string& origin, LoadedCase& loaded) {
   root.allow_only({"case", "fuel", "air", "operating_point", "firing", "post_flame", "stack", "report"});
