@@ -22,10 +22,14 @@ std::optional<double> optional_fraction(const std::string& text, std::string_vie
 
 std::string context_hint(em::ContextPiece piece) {
   switch (piece) {
-    case em::ContextPiece::moisture: return "give it with --moisture (H2O fraction of the wet gas, e.g. --moisture 12%)";
-    case em::ContextPiece::measured_o2: return "give it with --o2 (dry, e.g. --o2 7.2%) or state the O2 level in --from";
-    case em::ContextPiece::measured_co2: return "give it with --co2 (dry, e.g. --co2 9.5%) or state the CO2 level in --from";
-    case em::ContextPiece::molar_mass: return "give it with --molar-mass (e.g. --molar-mass \"200.59 g/mol\")";
+    case em::ContextPiece::moisture:
+      return "give it with --moisture (H2O fraction of the wet gas, e.g. --moisture 12%)";
+    case em::ContextPiece::measured_o2:
+      return "give it with --o2 (dry, e.g. --o2 7.2%) or state the O2 level in --from";
+    case em::ContextPiece::measured_co2:
+      return "give it with --co2 (dry, e.g. --co2 9.5%) or state the CO2 level in --from";
+    case em::ContextPiece::molar_mass:
+      return "give it with --molar-mass (e.g. --molar-mass \"200.59 g/mol\")";
   }
   return "";
 }
@@ -37,18 +41,21 @@ em::Pollutant pollutant_from(const ConversionQuery& query) {
         units::parse_quantity(query.molar_mass, "--molar-mass", {units::Dimension::mass_per_amount});
     const std::string_view symbol = parsed.unit->symbol;
     if (symbol != "g/mol" && symbol != "kg/kmol" && symbol != "kg/mol") {
-      throw units::InputError(fmt::format("--molar-mass = \"{}\": a molar mass is needed; accepted units: g/mol, kg/kmol, "
-                                          "kg/mol",
-                                          query.molar_mass));
+      throw units::InputError(
+          fmt::format("--molar-mass = \"{}\": a molar mass is needed; accepted units: g/mol, kg/kmol, "
+                      "kg/mol",
+                      query.molar_mass));
     }
     molar_mass = parsed.value_si;
   }
   return em::resolve_pollutant(query.pollutant, molar_mass, "POLLUTANT");
 }
 
-std::vector<em::Caution> cautions_for(const em::Basis& from, const em::Basis& to, const std::vector<em::AppliedFactor>& factors) {
+std::vector<em::Caution> cautions_for(const em::Basis& from, const em::Basis& to,
+                                      const std::vector<em::AppliedFactor>& factors) {
   std::vector<em::Caution> cautions;
-  if (from.reference.preset() != nullptr || to.reference.preset() != nullptr) cautions.push_back(em::Caution::confirm_presets);
+  if (from.reference.preset() != nullptr || to.reference.preset() != nullptr)
+    cautions.push_back(em::Caution::confirm_presets);
   for (const em::AppliedFactor& factor : factors) {
     if (factor.name == "O2 correction factor") {
       cautions.push_back(em::Caution::o2_correction_validity);
@@ -88,12 +95,14 @@ ConversionAnswer convert_query(const ConversionQuery& query) {
   context.moisture_fraction = optional_fraction(query.moisture, "--moisture");
   context.o2_dry_fraction = optional_fraction(query.o2, "--o2");
   context.co2_dry_fraction = optional_fraction(query.co2, "--co2");
-  context.o2_basis = query.o2_basis.empty() ? em::O2Basis::us_epa_20_9 : em::parse_o2_basis(query.o2_basis, "--o2-basis");
-  if (context.o2_dry_fraction) em::check_o2_level(*context.o2_dry_fraction, context.o2_basis, "--o2 (measured O2, dry)");
+  context.o2_basis =
+      query.o2_basis.empty() ? em::O2Basis::us_epa_20_9 : em::parse_o2_basis(query.o2_basis, "--o2-basis");
+  if (context.o2_dry_fraction)
+    em::check_o2_level(*context.o2_dry_fraction, context.o2_basis, "--o2 (measured O2, dry)");
   if (context.co2_dry_fraction) em::check_co2_level(*context.co2_dry_fraction, "--co2 (measured CO2, dry)");
   if (context.moisture_fraction && (*context.moisture_fraction < 0.0 || *context.moisture_fraction >= 1.0)) {
-    throw units::InputError(fmt::format("--moisture = \"{}\": the H2O fraction of the wet gas must be >= 0 % and below 100 %",
-                                        query.moisture));
+    throw units::InputError(fmt::format(
+        "--moisture = \"{}\": the H2O fraction of the wet gas must be >= 0 % and below 100 %", query.moisture));
   }
 
   em::Conversion conversion = [&] {

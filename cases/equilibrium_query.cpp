@@ -27,8 +27,9 @@ std::optional<units::Time> residence_time_option(const std::string& text) {
   const units::Time time = units::parse_time(text, "--residence-time");
   const double seconds = time.value();
   if (!(std::isfinite(seconds) && seconds >= 0.0 && seconds <= kMaximumResidenceTime_s)) {
-    throw units::InputError(fmt::format("--residence-time = \"{}\" ({:g} s): must be a finite time from 0 s to {:g} s (1 h)",
-                                        text, seconds, kMaximumResidenceTime_s));
+    throw units::InputError(
+        fmt::format("--residence-time = \"{}\" ({:g} s): must be a finite time from 0 s to {:g} s (1 h)", text, seconds,
+                    kMaximumResidenceTime_s));
   }
   return time;
 }

@@ -17,7 +17,8 @@ using units::Dimension;
 // The command line checks its choices before they get here; other front ends pass any text.
 void check_choice(const std::string& value, std::string_view option, std::string_view first, std::string_view second) {
   if (value != first && value != second) {
-    throw units::InputError(fmt::format("{} = \"{}\": not an accepted value; accepted: {}, {}", option, value, first, second));
+    throw units::InputError(
+        fmt::format("{} = \"{}\": not an accepted value; accepted: {}, {}", option, value, first, second));
   }
 }
 
@@ -25,22 +26,24 @@ core::Oxidant build_oxidant(const FuelConditions& o) {
   core::OxidantOptions options;
   options.temperature_field = "--air-temperature";
   options.enrichment_field = "--o2-enrichment";
-  if (!o.air_temperature.empty()) options.temperature = units::parse_temperature(o.air_temperature, "--air-temperature");
+  if (!o.air_temperature.empty())
+    options.temperature = units::parse_temperature(o.air_temperature, "--air-temperature");
   if (!o.relative_humidity.empty() && !o.humidity_ratio.empty()) {
     throw units::InputError("--relative-humidity, --humidity-ratio: give one of them, not both");
   }
   if (!o.relative_humidity.empty()) {
     const double rh = units::parse_fraction(o.relative_humidity, "--relative-humidity");
-    const units::Temperature ambient =
-        o.ambient_temperature.empty() ? units::kelvin(288.15)
-                                      : units::parse_temperature(o.ambient_temperature, "--ambient-temperature");
+    const units::Temperature ambient = o.ambient_temperature.empty()
+                                           ? units::kelvin(288.15)
+                                           : units::parse_temperature(o.ambient_temperature, "--ambient-temperature");
     const units::Pressure pressure = o.ambient_pressure.empty()
                                          ? units::pascals(units::kStandardAtmosphere_Pa)
                                          : checked_pressure(o.ambient_pressure, "--ambient-pressure", kAmbientPressure);
     options.humidity = core::Humidity::relative(rh, ambient, pressure, "--relative-humidity");
   } else if (!o.ambient_temperature.empty() || !o.ambient_pressure.empty()) {
-    throw units::InputError("--ambient-temperature, --ambient-pressure: they state where --relative-humidity was "
-                            "measured; give --relative-humidity too");
+    throw units::InputError(
+        "--ambient-temperature, --ambient-pressure: they state where --relative-humidity was "
+        "measured; give --relative-humidity too");
   }
   if (!o.humidity_ratio.empty()) {
     options.humidity = core::Humidity::ratio(

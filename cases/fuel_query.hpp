@@ -21,21 +21,21 @@ inline constexpr std::string_view kFuelCaution =
 
 // Option texts as given; empty means not given (the defaults are those of `stackbound fuel --help`).
 struct FuelConditions {
-  std::string excess_air;           // --excess-air; at most one of excess_air, lambda, phi, flue_o2
-  std::string lambda;               // --lambda
-  std::string phi;                  // --phi
-  std::string flue_o2;              // --flue-o2: the excess air is solved from it
+  std::string excess_air;             // --excess-air; at most one of excess_air, lambda, phi, flue_o2
+  std::string lambda;                 // --lambda
+  std::string phi;                    // --phi
+  std::string flue_o2;                // --flue-o2: the excess air is solved from it
   std::string flue_o2_basis = "dry";  // --flue-o2-basis: dry or wet
-  std::string air_temperature;      // --air-temperature (default 25 degC)
-  std::string relative_humidity;    // --relative-humidity, measured at ambient_temperature, ambient_pressure
-  std::string ambient_temperature;  // --ambient-temperature (default 15 degC)
-  std::string ambient_pressure;     // --ambient-pressure (default 1 atm)
-  std::string humidity_ratio;       // --humidity-ratio: kg water per kg dry air
-  std::string o2_enrichment;        // --o2-enrichment: dry O2 content of the oxidant
-  std::string fuel_temperature;     // --fuel-temperature (default: the fuel file's, else 25 degC)
-  std::string pressure;             // --pressure: flue gas pressure for the dew point (default 1 atm)
-  std::string rate;                 // --rate: fuel feed (default: the fuel file's feed_rate, if any)
-  std::string heat_basis = "hhv";   // --heat-basis of a heat-input rate: hhv or lhv
+  std::string air_temperature;        // --air-temperature (default 25 degC)
+  std::string relative_humidity;      // --relative-humidity, measured at ambient_temperature, ambient_pressure
+  std::string ambient_temperature;    // --ambient-temperature (default 15 degC)
+  std::string ambient_pressure;       // --ambient-pressure (default 1 atm)
+  std::string humidity_ratio;         // --humidity-ratio: kg water per kg dry air
+  std::string o2_enrichment;          // --o2-enrichment: dry O2 content of the oxidant
+  std::string fuel_temperature;       // --fuel-temperature (default: the fuel file's, else 25 degC)
+  std::string pressure;               // --pressure: flue gas pressure for the dew point (default 1 atm)
+  std::string rate;                   // --rate: fuel feed (default: the fuel file's feed_rate, if any)
+  std::string heat_basis = "hhv";     // --heat-basis of a heat-input rate: hhv or lhv
 };
 
 struct FuelAnswer {

@@ -11,10 +11,10 @@ namespace stackbound::python {
 cases::LoadedCase load_case_argument(py::handle value) {
   if (const auto path = path_text(value)) return cases::load_case_file(*path);
   if (py::isinstance<py::dict>(value)) return cases::read_case_document(to_yaml(value), std::string(kDictOrigin));
-  throw units::InputError(fmt::format("case = {}: a {}; expected the path of a case file or a dict with the case-file "
-                                      "schema (docs/case-file.md)",
-                                      py::repr(value).cast<std::string>(),
-                                      py::type::handle_of(value).attr("__name__").cast<std::string>()));
+  throw units::InputError(fmt::format(
+      "case = {}: a {}; expected the path of a case file or a dict with the case-file "
+      "schema (docs/case-file.md)",
+      py::repr(value).cast<std::string>(), py::type::handle_of(value).attr("__name__").cast<std::string>()));
 }
 
 core::SpeciesDatabase species_argument(py::handle species_file) {

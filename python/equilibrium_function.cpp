@@ -26,8 +26,8 @@ std::string species_text(py::handle species) {
 }
 
 py::object equilibrium(py::handle feed, py::handle temperature, py::handle pressure, py::handle adiabatic,
-                       py::handle residence_time, py::handle feed_temperature, py::handle heat_loss,
-                       py::handle species, py::handle species_file) {
+                       py::handle residence_time, py::handle feed_temperature, py::handle heat_loss, py::handle species,
+                       py::handle species_file) {
   if (!py::isinstance<py::bool_>(adiabatic)) {
     throw units::InputError(
         fmt::format("--adiabatic = {}: expected True or False", py::repr(adiabatic).cast<std::string>()));

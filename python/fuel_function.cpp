@@ -19,10 +19,10 @@ namespace {
 cases::FuelFile fuel_supply(py::handle spec, const core::SpeciesDatabase& database) {
   if (const auto path = path_text(spec)) return cases::read_fuel_file(*path, database);
   if (!py::isinstance<py::dict>(spec)) {
-    throw units::InputError(fmt::format("spec = {}: a {}; expected the path of a fuel file or a dict with the fuel "
-                                        "keys of a case file (docs/case-file.md, section fuel)",
-                                        py::repr(spec).cast<std::string>(),
-                                        py::type::handle_of(spec).attr("__name__").cast<std::string>()));
+    throw units::InputError(fmt::format(
+        "spec = {}: a {}; expected the path of a fuel file or a dict with the fuel "
+        "keys of a case file (docs/case-file.md, section fuel)",
+        py::repr(spec).cast<std::string>(), py::type::handle_of(spec).attr("__name__").cast<std::string>()));
   }
   const py::dict mapping = py::reinterpret_borrow<py::dict>(spec);
   const bool whole_document = mapping.size() == 1 && mapping.contains("fuel");

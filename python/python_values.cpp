@@ -9,12 +9,18 @@ namespace stackbound::python {
 
 py::object to_python(const nlohmann::json& value) {
   switch (value.type()) {
-    case nlohmann::json::value_t::null: return py::none();
-    case nlohmann::json::value_t::boolean: return py::bool_(value.get<bool>());
-    case nlohmann::json::value_t::number_integer: return py::int_(value.get<std::int64_t>());
-    case nlohmann::json::value_t::number_unsigned: return py::int_(value.get<std::uint64_t>());
-    case nlohmann::json::value_t::number_float: return py::float_(value.get<double>());
-    case nlohmann::json::value_t::string: return py::str(value.get_ref<const std::string&>());
+    case nlohmann::json::value_t::null:
+      return py::none();
+    case nlohmann::json::value_t::boolean:
+      return py::bool_(value.get<bool>());
+    case nlohmann::json::value_t::number_integer:
+      return py::int_(value.get<std::int64_t>());
+    case nlohmann::json::value_t::number_unsigned:
+      return py::int_(value.get<std::uint64_t>());
+    case nlohmann::json::value_t::number_float:
+      return py::float_(value.get<double>());
+    case nlohmann::json::value_t::string:
+      return py::str(value.get_ref<const std::string&>());
     case nlohmann::json::value_t::array: {
       py::list list(value.size());
       for (std::size_t i = 0; i < value.size(); ++i) list[i] = to_python(value[i]);
@@ -26,7 +32,8 @@ py::object to_python(const nlohmann::json& value) {
       return dict;
     }
     case nlohmann::json::value_t::binary:
-    case nlohmann::json::value_t::discarded: break;
+    case nlohmann::json::value_t::discarded:
+      break;
   }
   throw std::logic_error("to_python: a JSON value of a kind our documents never hold");
 }
@@ -36,8 +43,8 @@ std::string utf8_text(py::handle text, std::string_view field) {
   const char* data = PyUnicode_AsUTF8AndSize(text.ptr(), &size);
   if (data == nullptr) {
     PyErr_Clear();
-    throw units::InputError(fmt::format("{}: the text has no UTF-8 form (it holds a lone surrogate); give valid Unicode text",
-                                        field));
+    throw units::InputError(
+        fmt::format("{}: the text has no UTF-8 form (it holds a lone surrogate); give valid Unicode text", field));
   }
   return std::string(data, static_cast<std::size_t>(size));
 }
@@ -65,11 +72,12 @@ std::string type_name(py::handle value) { return py::type::handle_of(value).attr
 
 YAML::Node to_yaml(py::handle value, const std::string& path, std::size_t depth) {
   if (depth > cases::kMaxYamlNesting) {
-    throw units::InputError(fmt::format("{}: {}: nested deeper than {} levels", kDictOrigin, where(path),
-                                        cases::kMaxYamlNesting));
+    throw units::InputError(
+        fmt::format("{}: {}: nested deeper than {} levels", kDictOrigin, where(path), cases::kMaxYamlNesting));
   }
   if (value.is_none()) return YAML::Node(YAML::NodeType::Null);
-  if (py::isinstance<py::str>(value)) return YAML::Node(utf8_text(value, fmt::format("{}: {}", kDictOrigin, where(path))));
+  if (py::isinstance<py::str>(value))
+    return YAML::Node(utf8_text(value, fmt::format("{}: {}", kDictOrigin, where(path))));
   if (py::isinstance<py::dict>(value)) {
     YAML::Node map(YAML::NodeType::Map);
     for (const auto& [key, item] : py::reinterpret_borrow<py::dict>(value)) {

@@ -30,15 +30,17 @@ std::vector<std::string> vary_texts(py::handle vary) {
   } else if (py::isinstance<py::list>(vary) || py::isinstance<py::tuple>(vary)) {
     for (const py::handle text : vary) {
       if (!py::isinstance<py::str>(text)) {
-        throw units::InputError(fmt::format("--vary = {}: expected a text PARAM=FROM:TO:STEPS, e.g. excess_air=5%:45%:9",
-                                            py::repr(text).cast<std::string>()));
+        throw units::InputError(
+            fmt::format("--vary = {}: expected a text PARAM=FROM:TO:STEPS, e.g. excess_air=5%:45%:9",
+                        py::repr(text).cast<std::string>()));
       }
       texts.push_back(utf8_text(text, "--vary"));
     }
   } else {
-    throw units::InputError(fmt::format("--vary = {}: expected a list of PARAM=FROM:TO:STEPS texts or a dict "
-                                        "{{PARAM: \"FROM:TO:STEPS\"}}",
-                                        py::repr(vary).cast<std::string>()));
+    throw units::InputError(
+        fmt::format("--vary = {}: expected a list of PARAM=FROM:TO:STEPS texts or a dict "
+                    "{{PARAM: \"FROM:TO:STEPS\"}}",
+                    py::repr(vary).cast<std::string>()));
   }
   if (texts.empty()) throw units::InputError("--vary: missing; give at least one PARAM=FROM:TO:STEPS");
   return texts;
@@ -46,8 +48,8 @@ std::vector<std::string> vary_texts(py::handle vary) {
 
 std::size_t count_argument(py::handle value, std::string_view option, std::size_t low) {
   if (!py::isinstance<py::int_>(value) || py::isinstance<py::bool_>(value) || value.cast<py::int_>() < py::int_(low)) {
-    throw units::InputError(fmt::format("{} = {}: expected a whole number >= {}", option,
-                                        py::repr(value).cast<std::string>(), low));
+    throw units::InputError(
+        fmt::format("{} = {}: expected a whole number >= {}", option, py::repr(value).cast<std::string>(), low));
   }
   return value.cast<std::size_t>();
 }
@@ -90,13 +92,14 @@ py::dict sweep(py::handle case_value, py::handle vary_value, py::handle threads,
   {
     const py::gil_scoped_release release;
     render::SweepColumnsCollector collector(vary, total);
-    cases::run_sweep(loaded.definition, vary, database, [&](const cases::SweepPoint& p) { collector.add(p); },
-                     options);
+    cases::run_sweep(
+        loaded.definition, vary, database, [&](const cases::SweepPoint& p) { collector.add(p); }, options);
     columns = std::move(collector).finish();
   }
   py::dict result;
   result["point"] = numpy_column(std::move(columns.point));
-  for (render::NumberColumn& column : columns.numbers) result[py::str(column.key)] = numpy_column(std::move(column.values));
+  for (render::NumberColumn& column : columns.numbers)
+    result[py::str(column.key)] = numpy_column(std::move(column.values));
   result["status"] = text_column(columns.status);
   result["error"] = text_column(columns.error);
   return result;

@@ -40,28 +40,30 @@ nlohmann::json conversion_json(const cases::ConversionAnswer& answer) {
                            {"note", "preset: confirm against your permit"}});
   }
   nlohmann::json caution_list = nlohmann::json::array();
-  for (const em::Caution c : answer.cautions) caution_list.push_back({{"key", em::caution(c).key}, {"text", em::caution(c).text}});
-  const auto optional_json = [](const std::optional<double>& v) { return v ? nlohmann::json(*v) : nlohmann::json(nullptr); };
-  return {
-      {"value", result.value()},
-      {"unit", result.basis().unit.symbol},
-      {"basis", result.basis().text()},
-      {"pollutant", pollutant.name},
-      {"text", result.text(6)},
-      {"normal_conditions", normal_json(result.basis().unit.normal)},
-      {"input",
-       {{"value", input.value()},
-        {"unit", input.basis().unit.symbol},
-        {"basis", input.basis().text()},
-        {"normal_conditions", normal_json(input.basis().unit.normal)}}},
-      {"context",
-       {{"o2_basis_percent", em::o2_basis_percent(context.o2_basis)},
-        {"moisture_fraction", optional_json(context.moisture_fraction)},
-        {"o2_dry_fraction", optional_json(context.o2_dry_fraction)},
-        {"co2_dry_fraction", optional_json(context.co2_dry_fraction)}}},
-      {"factors", factors},
-      {"presets", preset_list},
-      {"cautions", caution_list}};
+  for (const em::Caution c : answer.cautions)
+    caution_list.push_back({{"key", em::caution(c).key}, {"text", em::caution(c).text}});
+  const auto optional_json = [](const std::optional<double>& v) {
+    return v ? nlohmann::json(*v) : nlohmann::json(nullptr);
+  };
+  return {{"value", result.value()},
+          {"unit", result.basis().unit.symbol},
+          {"basis", result.basis().text()},
+          {"pollutant", pollutant.name},
+          {"text", result.text(6)},
+          {"normal_conditions", normal_json(result.basis().unit.normal)},
+          {"input",
+           {{"value", input.value()},
+            {"unit", input.basis().unit.symbol},
+            {"basis", input.basis().text()},
+            {"normal_conditions", normal_json(input.basis().unit.normal)}}},
+          {"context",
+           {{"o2_basis_percent", em::o2_basis_percent(context.o2_basis)},
+            {"moisture_fraction", optional_json(context.moisture_fraction)},
+            {"o2_dry_fraction", optional_json(context.o2_dry_fraction)},
+            {"co2_dry_fraction", optional_json(context.co2_dry_fraction)}}},
+          {"factors", factors},
+          {"presets", preset_list},
+          {"cautions", caution_list}};
 }
 
 }  // namespace stackbound::render

@@ -36,15 +36,20 @@ nlohmann::json fuel_json(const cases::FuelAnswer& answer) {
   const double vn = nm3_per_mol();
   const double hhv = r.hhv_J_per_kg;
   const core::AsFiredAnalysis a = fuel.as_fired_analysis();
-  nlohmann::json fuel_part = {
-      {"name", fuel.name()},
-      {"state", core::to_string(fuel.state())},
-      {"source", fuel.source()},
-      {"heating_value_method", fuel.heating_value_method()},
-      {"temperature_K", r.fuel_temperature_K},
-      {"as_fired_mass_percent",
-       {{"C", a.carbon_percent}, {"H", a.hydrogen_percent}, {"O", a.oxygen_percent}, {"N", a.nitrogen_percent},
-        {"S", a.sulfur_percent}, {"ash", a.ash_percent}, {"moisture", a.moisture_percent}, {"other", a.other_percent}}}};
+  nlohmann::json fuel_part = {{"name", fuel.name()},
+                              {"state", core::to_string(fuel.state())},
+                              {"source", fuel.source()},
+                              {"heating_value_method", fuel.heating_value_method()},
+                              {"temperature_K", r.fuel_temperature_K},
+                              {"as_fired_mass_percent",
+                               {{"C", a.carbon_percent},
+                                {"H", a.hydrogen_percent},
+                                {"O", a.oxygen_percent},
+                                {"N", a.nitrogen_percent},
+                                {"S", a.sulfur_percent},
+                                {"ash", a.ash_percent},
+                                {"moisture", a.moisture_percent},
+                                {"other", a.other_percent}}}};
   if (!fuel.mole_fractions().empty()) fuel_part["mole_fractions"] = fractions_json(fuel.mole_fractions());
   if (const auto m = fuel.molar_mass_kg_per_mol()) {
     fuel_part["molar_mass_g_per_mol"] = *m * 1e3;
@@ -71,7 +76,8 @@ nlohmann::json fuel_json(const cases::FuelAnswer& answer) {
       {"lambda", r.air_ratio},
       {"phi", r.equivalence_ratio()},
       {"stoichiometric_air_kg_per_kg", r.stoichiometric_air_kg_per_kg},
-      {"stoichiometric_air_Nm3_per_kg", r.stoichiometric_oxidant_mol_per_kg * (1.0 - oxidant.water_mole_fraction()) * vn},
+      {"stoichiometric_air_Nm3_per_kg",
+       r.stoichiometric_oxidant_mol_per_kg * (1.0 - oxidant.water_mole_fraction()) * vn},
       {"oxidant_kg_per_kg", r.oxidant_kg_per_kg},
       {"oxidant_mol_per_kg", r.oxidant_mol_per_kg},
       {"flue_gas_wet", fractions_json(r.flue.mole_fractions(core::GasBasis::wet))},

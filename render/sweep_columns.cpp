@@ -53,7 +53,8 @@ void SweepColumnsCollector::add(const SweepPoint& point) {
     }
     for (std::size_t m = 0; m < values.size(); ++m) {
       if (!std::isfinite(values[m]) && !is_missing(result_columns_[m], values[m])) {
-        throw NonFiniteFigure(fmt::format("sweep point {}: figure {} of the row is not finite", point.index + 1, m + 1));
+        throw NonFiniteFigure(
+            fmt::format("sweep point {}: figure {} of the row is not finite", point.index + 1, m + 1));
       }
       columns_.numbers[vary_.size() + m].values.push_back(values[m]);
     }
