@@ -88,6 +88,11 @@ py::dict sweep(py::handle case_value, py::handle vary_value, py::handle threads,
   cases::check_sweep(loaded.definition, vary);
   const core::SpeciesDatabase database = species_argument(species_file);
   options.sources = &loaded.sources;
+  // After each batch of points: Ctrl-C (KeyboardInterrupt) stops the sweep, with no partial result.
+  options.progress = [](std::size_t, std::size_t) {
+    const py::gil_scoped_acquire acquire;
+    if (PyErr_CheckSignals() != 0) throw py::error_already_set();
+  };
   render::SweepColumns columns;
   {
     const py::gil_scoped_release release;
@@ -125,7 +130,8 @@ array per varied parameter ("vary_excess_air_percent"; units %, K or kPa as in t
 result under the keys of docs/report-json.md (NaN where a point failed or has no post-flame
 figure), and the lists "status" ("ok" or "failed") and "error" (why a point failed). The numbers are
 those of `stackbound sweep CASE --vary ...` (its CSV rounds them to 8 significant digits). Raises
-stackbound.InputError with the command line's message before any point runs.
+stackbound.InputError with the command line's message before any point runs; Ctrl-C stops it
+(KeyboardInterrupt) with no result.
 
 Example:
     import pandas

@@ -122,3 +122,16 @@ def test_vary_of_the_wrong_type_is_input_error():
         stackbound.sweep(GAS_BOILER, 5)
     assert str(raised.value) == ('--vary = 5: expected a list of PARAM=FROM:TO:STEPS texts or a dict '
                                  '{PARAM: "FROM:TO:STEPS"}')
+
+
+def test_ctrl_c_stops_a_long_sweep_with_keyboard_interrupt():
+    # Wrong if a notebook user could not interrupt a long sweep (the library runs without the GIL).
+    import _thread
+    import threading
+    timer = threading.Timer(0.3, _thread.interrupt_main)
+    timer.start()
+    try:
+        with pytest.raises(KeyboardInterrupt):
+            stackbound.sweep(GAS_BOILER, ["reference_o2=1%:15%:100000", "excess_air=5%:45%:10"])
+    finally:
+        timer.cancel()
