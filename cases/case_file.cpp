@@ -321,11 +321,8 @@ void check_reference_o2(const CaseDefinition& definition, const std::optional<Ya
   throw units::InputError(fmt::format("{}: report.reference_o2 = \"preset\": {}", definition.origin, problem));
 }
 
-}  // namespace
-
-LoadedCase parse_case_file(std::string_view text, const std::string& origin) {
-  LoadedCase loaded{CaseDefinition{}, SourceMap(origin)};
-  const YamlField root = YamlField::load(text, origin, &loaded.sources);
+// Reads the case from its root mapping; `loaded` holds the source map `root` records into.
+void read_case(const YamlField& root, const std::string& origin, LoadedCase& loaded) {
   root.allow_only({"case", "fuel", "air", "operating_point", "firing", "post_flame", "stack", "report"});
   CaseDefinition& definition = loaded.definition;
   definition.origin = origin;
@@ -351,6 +348,24 @@ LoadedCase parse_case_file(std::string_view text, const std::string& origin) {
   for (const std::string_view section : kSections) {
     if (!loaded.sources.location_of(section)) loaded.sources.add(std::string(section), origin);
   }
+}
+
+}  // namespace
+
+LoadedCase parse_case_file(std::string_view text, const std::string& origin) {
+  LoadedCase loaded{CaseDefinition{}, SourceMap(origin)};
+  read_case(YamlField::load(text, origin, &loaded.sources), origin, loaded);
+  return loaded;
+}
+
+LoadedCase read_case_document(const YAML::Node& document, const std::string& origin) {
+  if (!document.IsMap()) {
+    throw units::InputError(fmt::format("{}: the case must be a mapping of sections (case, fuel, air, "
+                                        "operating_point, firing, stack, report)",
+                                        origin));
+  }
+  LoadedCase loaded{CaseDefinition{}, SourceMap::for_document(origin)};
+  read_case(YamlField(document, origin, "", &loaded.sources), origin, loaded);
   return loaded;
 }
 

@@ -7,6 +7,8 @@
 #include <string>
 #include <string_view>
 
+#include <yaml-cpp/yaml.h>
+
 #include "stackbound/cases/case_definition.hpp"
 #include "stackbound/cases/source_map.hpp"
 
@@ -21,6 +23,10 @@ struct LoadedCase {
 
 // Parses case text; `origin` is the file name used in messages. Throws units::InputError.
 LoadedCase parse_case_file(std::string_view text, const std::string& origin);
+
+// The same for a document built in memory (the Python module's dict); its nodes have no positions, so
+// errors read "<origin>: <field path> ...".
+LoadedCase read_case_document(const YAML::Node& document, const std::string& origin);
 
 // Reads and parses a case file. Throws units::InputError (also when the file cannot be read).
 LoadedCase load_case_file(const std::string& path);

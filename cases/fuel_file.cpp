@@ -14,12 +14,10 @@
 namespace stackbound::cases {
 
 namespace {
-using units::Dimension;
-}  // namespace
 
-FuelFile parse_fuel_file(std::string_view text, const std::string& origin, const core::SpeciesDatabase& database) {
-  SourceMap sources(origin);
-  const YamlField root = YamlField::load(text, origin, &sources);
+using units::Dimension;
+
+FuelFile read_fuel(const YamlField& root, const SourceMap& sources, const core::SpeciesDatabase& database) {
   root.allow_only({"fuel"});
   const YamlField fuel = root.required("fuel");
   const FuelSpec spec = read_fuel_spec(fuel, false);
@@ -35,6 +33,21 @@ FuelFile parse_fuel_file(std::string_view text, const std::string& origin, const
   }
   if (const auto t = fuel.optional("temperature")) file.temperature_K = t->quantity_si(Dimension::temperature);
   return file;
+}
+
+}  // namespace
+
+FuelFile parse_fuel_file(std::string_view text, const std::string& origin, const core::SpeciesDatabase& database) {
+  SourceMap sources(origin);
+  const YamlField root = YamlField::load(text, origin, &sources);
+  return read_fuel(root, sources, database);
+}
+
+FuelFile read_fuel_document(const YAML::Node& document, const std::string& origin,
+                            const core::SpeciesDatabase& database) {
+  if (!document.IsMap()) throw units::InputError(origin + ": a fuel document must be a mapping with the key fuel");
+  const SourceMap sources = SourceMap::for_document(origin);
+  return read_fuel(YamlField(document, origin, "", nullptr), sources, database);
 }
 
 FuelFile read_fuel_file(const std::string& path, const core::SpeciesDatabase& database) {

@@ -8,6 +8,8 @@
 #include <string>
 #include <string_view>
 
+#include <yaml-cpp/yaml.h>
+
 #include "stackbound/core/fuel.hpp"
 #include "stackbound/core/species_database.hpp"
 #include "stackbound/units/quantity_parser.hpp"
@@ -23,6 +25,9 @@ struct FuelFile {
 
 // Parses fuel-file text; `origin` is the file name used in messages.
 FuelFile parse_fuel_file(std::string_view text, const std::string& origin, const core::SpeciesDatabase& database);
+
+// The same for a document built in memory (the Python module's dict); errors read "<origin>: <field path> ...".
+FuelFile read_fuel_document(const YAML::Node& document, const std::string& origin, const core::SpeciesDatabase& database);
 
 // Reads and parses a fuel file; a file that cannot be read is an InputError naming the path.
 FuelFile read_fuel_file(const std::string& path, const core::SpeciesDatabase& database);

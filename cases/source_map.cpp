@@ -22,6 +22,12 @@ bool is_field_path(std::string_view text) {
 
 }  // namespace
 
+SourceMap SourceMap::for_document(std::string origin) {
+  SourceMap map(std::move(origin));
+  map.keeps_paths_ = true;
+  return map;
+}
+
 void SourceMap::add(std::string path, std::string location) {
   const auto found =
       std::find_if(entries_.begin(), entries_.end(), [&](const auto& entry) { return entry.first == path; });
@@ -45,6 +51,7 @@ std::string SourceMap::locate(std::string_view message) const {
   const std::size_t colon = message.find(": ");
   if (colon == std::string_view::npos) return std::string(message);
   const std::string_view path = message.substr(0, colon);
+  if (keeps_paths_) return is_field_path(path) ? origin_ + ": " + std::string(message) : std::string(message);
   const std::optional<std::string> location = is_field_path(path) ? location_of(path) : std::nullopt;
   if (!location) return std::string(message);
   return *location + std::string(message.substr(colon));

@@ -22,6 +22,9 @@ namespace stackbound::cases {
 class SourceMap {
  public:
   explicit SourceMap(std::string origin) : origin_(std::move(origin)) {}
+  // For a document built in memory (the Python module's dict), whose fields have no positions:
+  // locate() keeps the path and puts the origin in front ("<dict>: firing.temperature: ...").
+  [[nodiscard]] static SourceMap for_document(std::string origin);
 
   [[nodiscard]] const std::string& origin() const { return origin_; }
   // Records (or replaces) the position of `path`.
@@ -29,11 +32,13 @@ class SourceMap {
   // The position of `path`, else of its nearest recorded parent ("stack.measured" for
   // "stack.measured.co", "fuel.blend" for "fuel.blend[1]"); none when no part of it is recorded.
   [[nodiscard]] std::optional<std::string> location_of(std::string_view path) const;
-  // A run's message "<path>: <text>" as "<position>: <text>"; any other message unchanged.
+  // A run's message "<path>: <text>" as "<position>: <text>" (for_document(): "<origin>: <path>: <text>");
+  // any other message unchanged.
   [[nodiscard]] std::string locate(std::string_view message) const;
 
  private:
   std::string origin_;
+  bool keeps_paths_ = false;  // for_document()
   std::vector<std::pair<std::string, std::string>> entries_;  // a few dozen; searched only on errors
 };
 

@@ -211,6 +211,22 @@ std::size_t sweep_size(const std::vector<VarySpec>& vary) {
   return vary.empty() ? 0 : size;
 }
 
+std::size_t checked_sweep_size(const std::vector<VarySpec>& vary, std::size_t max_points) {
+  std::size_t total = 1;
+  std::string grid;
+  for (const VarySpec& spec : vary) {
+    const std::size_t n = spec.values.size();
+    total = (n != 0 && total > max_points / n) ? max_points + 1 : total * n;
+    grid += (grid.empty() ? "" : " x ") + std::to_string(n);
+  }
+  if (total > max_points) {
+    throw units::InputError(fmt::format("--vary: the grid of {} points exceeds the cap of {} points; use fewer STEPS, "
+                                        "or raise the cap with --max-points",
+                                        grid, max_points));
+  }
+  return total;
+}
+
 namespace {
 
 std::vector<double> values_at(const std::vector<VarySpec>& vary, std::size_t index) {

@@ -78,6 +78,13 @@ struct SweepPoint {
 // Number of points of the grid (product of the value counts).
 std::size_t sweep_size(const std::vector<VarySpec>& vary);
 
+// The default cap on the points of a grid.
+inline constexpr std::size_t kDefaultMaxSweepPoints = 10'000'000;
+
+// The number of points, checked against the cap before any work: a grid of 31623 x 31623 points would
+// otherwise stream until the disk fills. Throws units::InputError naming --vary and --max-points.
+std::size_t checked_sweep_size(const std::vector<VarySpec>& vary, std::size_t max_points);
+
 struct SweepOptions {
   unsigned threads = 0;               // 0: all cores
   std::size_t batch_points = 512;     // points held in memory at once

@@ -31,11 +31,17 @@ YamlField YamlField::child(YAML::Node node, std::string path) const {
 
 bool YamlField::has(std::string_view key) const { return node_.IsMap() && node_[std::string(key)].IsDefined(); }
 
-std::string YamlField::location() const {
-  const YAML::Mark mark = node_.Mark();
-  if (mark.line < 0) return origin_;
-  return fmt::format("{}:{}:{}", origin_, mark.line + 1, mark.column + 1);
+namespace {
+
+// "file:line:column"; a node built in memory (not parsed from text) has no position: the origin alone.
+std::string position(const std::string& origin, const YAML::Mark& mark) {
+  if (mark.line < 0) return origin;
+  return fmt::format("{}:{}:{}", origin, mark.line + 1, mark.column + 1);
 }
+
+}  // namespace
+
+std::string YamlField::location() const { return position(origin_, node_.Mark()); }
 
 void YamlField::fail(const std::string& problem) const {
   const std::string where = path_.empty() ? "(top level)" : path_;
@@ -54,8 +60,7 @@ void YamlField::allow_only(std::initializer_list<std::string_view> allowed) cons
     std::string problem = fmt::format("unknown key \"{}\"", key);
     if (const auto suggestion = units::nearest_name(key, names)) problem += fmt::format(" (did you mean \"{}\"?)", *suggestion);
     problem += fmt::format("; accepted keys: {}", fmt::join(names, ", "));
-    const YAML::Mark mark = entry.first.Mark();
-    throw units::InputError(fmt::format("{}:{}:{}: {}: {}", origin_, mark.line + 1, mark.column + 1,
+    throw units::InputError(fmt::format("{}: {}: {}", position(origin_, entry.first.Mark()),
                                         path_.empty() ? "(top level)" : path_, problem));
   }
 }

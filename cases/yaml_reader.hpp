@@ -34,7 +34,7 @@ class YamlField {
   [[nodiscard]] bool is_scalar() const { return node_.IsScalar(); }
   [[nodiscard]] bool has(std::string_view key) const;
   [[nodiscard]] std::size_t size() const { return node_.size(); }
-  // "file:line:column" of this node.
+  // "file:line:column" of this node; the origin alone for a node built in memory.
   [[nodiscard]] std::string location() const;
 
   // Refuses any key not in `allowed` (this node must be a mapping), suggesting the nearest.

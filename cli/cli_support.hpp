@@ -1,6 +1,6 @@
 #pragma once
-// Pieces shared by the command-line subcommands: global options, formats, lists. (Output files:
-// cli/output_file.hpp.)
+// Pieces shared by the command-line subcommands: global options, formats. (Output files:
+// cli/output_file.hpp; option values shared with the Python module: cases/option_values.hpp.)
 
 #include <cstdio>
 #include <stdexcept>
@@ -10,10 +10,8 @@
 
 #include <CLI/CLI.hpp>
 
-#include "stackbound/cases/plausible_ranges.hpp"
 #include "stackbound/cli/output_file.hpp"
 #include "stackbound/core/species_database.hpp"
-#include "stackbound/units/quantities.hpp"
 
 namespace stackbound::cli {
 
@@ -31,12 +29,5 @@ class PartialFailure : public std::runtime_error {
 
 // Registers `--format` with the accepted values and the default; the help text lists them.
 CLI::Option* add_format_option(CLI::App& command, std::string& format, const std::vector<std::string>& accepted);
-
-// A pressure option parsed and checked against the range the tool accepts for it (plausible_ranges.hpp);
-// InputError '<option> = "<text>": outside ...' otherwise.
-units::Pressure checked_pressure(std::string_view text, std::string_view option, const cases::PlausibleRange& range);
-
-// Splits "CO2,CO, O2" into trimmed names; empty items are an InputError naming the option.
-std::vector<std::string> split_list(std::string_view text, std::string_view option);
 
 }  // namespace stackbound::cli

@@ -13,10 +13,12 @@
 
 #include <nlohmann/json.hpp>
 
-#include "stackbound/render/finite_figures.hpp"
-#include "stackbound/cli/commands.hpp"
 #include "stackbound/cases/fuel_file.hpp"
+#include "stackbound/cases/fuel_query.hpp"
 #include "stackbound/cases/species_file.hpp"
+#include "stackbound/cli/commands.hpp"
+#include "stackbound/render/finite_figures.hpp"
+#include "stackbound/render/fuel_json.hpp"
 #include "stackbound/core/combustion.hpp"
 #include "stackbound/core/composition_notation.hpp"
 #include "stackbound/core/elements.hpp"
@@ -34,20 +36,6 @@ namespace {
 
 using units::Dimension;
 
-constexpr std::string_view kCaution =
-    "Caution: these are complete-combustion estimates from the stated fuel, oxidant and operating point, for\n"
-    "screening; they are not measurements and not a compliance determination. Permits, regulators, local\n"
-    "codes and licensed practice govern.";
-
-// The caution as one paragraph (JSON).
-std::string caution_one_line() {
-  std::string text(kCaution);
-  for (char& c : text) {
-    if (c == '\n') c = ' ';
-  }
-  return text;
-}
-
 struct FuelOptions {
   std::string file;
   std::string gas;
@@ -59,21 +47,7 @@ struct FuelOptions {
   std::string hhv;
   std::string lhv;
   std::string estimate;
-  std::string excess_air;
-  std::string lambda;
-  std::string phi;
-  std::string flue_o2;
-  std::string flue_o2_basis = "dry";
-  std::string air_temperature;
-  std::string relative_humidity;
-  std::string ambient_temperature;
-  std::string ambient_pressure;
-  std::string humidity_ratio;
-  std::string o2_enrichment;
-  std::string fuel_temperature;
-  std::string pressure;
-  std::string rate;
-  std::string heat_basis = "hhv";
+  FuelConditions conditions;  // oxidant, operating point, feed
   bool list_presets = false;
   std::string format;
   std::string output;
@@ -111,13 +85,7 @@ core::UltimateAnalysis ultimate_from_text(const FuelOptions& o) {
   return a;
 }
 
-struct FuelInput {
-  std::optional<core::Fuel> fuel;
-  std::optional<units::ParsedQuantity> file_rate;
-  std::optional<double> file_temperature_K;
-};
-
-FuelInput build_fuel(const FuelOptions& o, const core::SpeciesDatabase& db) {
+FuelFile build_fuel(const FuelOptions& o, const core::SpeciesDatabase& db) {
   const int sources = !o.file.empty() + !o.gas.empty() + !o.preset.empty() + !o.ultimate.empty();
   if (sources != 1) {
     throw units::InputError(fmt::format("stackbound fuel: give exactly one fuel: FILE.yaml, --gas, --preset or --ultimate "
@@ -128,21 +96,17 @@ FuelInput build_fuel(const FuelOptions& o, const core::SpeciesDatabase& db) {
     throw units::InputError("--hhv, --lhv and --estimate go with --ultimate (a gas's heating value is computed from the "
                             "species data; a file or preset states its own)");
   }
-  FuelInput input;
-  if (!o.file.empty()) {
-    FuelFile file = read_fuel_file(o.file, db);
-    input.fuel = file.fuel;
-    input.file_rate = file.feed_rate;
-    input.file_temperature_K = file.temperature_K;
-  } else if (!o.preset.empty()) {
-    input.fuel = core::preset_fuel(o.preset, db, "--preset");
+  if (!o.file.empty()) return read_fuel_file(o.file, db);
+  const auto supply = [](core::Fuel fuel) { return FuelFile{std::move(fuel), std::nullopt, "", std::nullopt}; };
+  if (!o.preset.empty()) {
+    return supply(core::preset_fuel(o.preset, db, "--preset"));
   } else if (!o.gas.empty()) {
     core::GasFuelSpec spec;
     spec.name = "gas fuel";
     spec.composition_percent = core::parse_analysis(o.gas, "--gas", core::gas_analysis_vocabulary(db));
     spec.basis = o.gas_basis == "mass" ? core::CompositionBasis::mass : core::CompositionBasis::mole;
     spec.field = "--gas";
-    input.fuel = core::Fuel::gas(spec, db);
+    return supply(core::Fuel::gas(spec, db));
   } else {
     core::CondensedFuelSpec spec;
     spec.name = o.state == "liquid" ? "liquid fuel" : "solid fuel";
@@ -165,80 +129,8 @@ FuelInput build_fuel(const FuelOptions& o, const core::SpeciesDatabase& db) {
       throw units::InputError("--ultimate: a liquid or solid fuel needs a heating value: --hhv or --lhv (e.g. \"31.4 "
                               "MJ/kg\", on the --analysis-basis), or --estimate channiwala_parikh|boie");
     }
-    input.fuel = core::Fuel::condensed(spec, db);
+    return supply(core::Fuel::condensed(spec, db));
   }
-  return input;
-}
-
-core::Oxidant build_oxidant(const FuelOptions& o) {
-  core::OxidantOptions options;
-  options.temperature_field = "--air-temperature";
-  options.enrichment_field = "--o2-enrichment";
-  if (!o.air_temperature.empty()) options.temperature = units::parse_temperature(o.air_temperature, "--air-temperature");
-  if (!o.relative_humidity.empty() && !o.humidity_ratio.empty()) {
-    throw units::InputError("--relative-humidity, --humidity-ratio: give one of them, not both");
-  }
-  if (!o.relative_humidity.empty()) {
-    const double rh = units::parse_fraction(o.relative_humidity, "--relative-humidity");
-    const units::Temperature ambient =
-        o.ambient_temperature.empty() ? units::kelvin(288.15)
-                                      : units::parse_temperature(o.ambient_temperature, "--ambient-temperature");
-    const units::Pressure pressure = o.ambient_pressure.empty()
-                                         ? units::pascals(units::kStandardAtmosphere_Pa)
-                                         : checked_pressure(o.ambient_pressure, "--ambient-pressure", cases::kAmbientPressure);
-    options.humidity = core::Humidity::relative(rh, ambient, pressure, "--relative-humidity");
-  } else if (!o.ambient_temperature.empty() || !o.ambient_pressure.empty()) {
-    throw units::InputError("--ambient-temperature, --ambient-pressure: they state where --relative-humidity was "
-                            "measured; give --relative-humidity too");
-  }
-  if (!o.humidity_ratio.empty()) {
-    options.humidity = core::Humidity::ratio(
-        units::parse_quantity(o.humidity_ratio, "--humidity-ratio", {Dimension::dimensionless}).value_si,
-        "--humidity-ratio");
-  }
-  if (!o.o2_enrichment.empty()) {
-    options.enriched_o2_fraction = units::parse_fraction(o.o2_enrichment, "--o2-enrichment");
-  }
-  return core::Oxidant(options);
-}
-
-core::OperatingPoint build_operating_point(const FuelOptions& o, std::optional<double> file_temperature_K) {
-  const int given = !o.excess_air.empty() + !o.lambda.empty() + !o.phi.empty() + !o.flue_o2.empty();
-  if (given > 1) {
-    throw units::InputError("--excess-air, --lambda, --phi, --flue-o2: give one of them, not several");
-  }
-  core::OperatingPoint op = core::OperatingPoint::with_excess_air(0.0, "--excess-air");
-  if (!o.excess_air.empty()) {
-    op = core::OperatingPoint::with_excess_air(units::parse_fraction(o.excess_air, "--excess-air"), "--excess-air");
-  } else if (!o.lambda.empty()) {
-    op = core::OperatingPoint::with_air_ratio(
-        units::parse_quantity(o.lambda, "--lambda", {Dimension::dimensionless}).value_si, "--lambda");
-  } else if (!o.phi.empty()) {
-    op = core::OperatingPoint::with_equivalence_ratio(
-        units::parse_quantity(o.phi, "--phi", {Dimension::dimensionless}).value_si, "--phi");
-  } else if (!o.flue_o2.empty()) {
-    op = core::OperatingPoint::with_flue_o2(units::parse_fraction(o.flue_o2, "--flue-o2"),
-                                            o.flue_o2_basis == "wet" ? core::GasBasis::wet : core::GasBasis::dry,
-                                            "--flue-o2");
-  }
-  if (!o.fuel_temperature.empty()) {
-    op.fuel_temperature = units::parse_temperature(o.fuel_temperature, "--fuel-temperature");
-  } else if (file_temperature_K) {
-    op.fuel_temperature = units::kelvin(*file_temperature_K);
-  }
-  op.fuel_temperature_field = "--fuel-temperature";
-  if (!o.pressure.empty()) op.flue_pressure = checked_pressure(o.pressure, "--pressure", cases::kStackPressure);
-  return op;
-}
-
-std::string operating_point_text(const FuelOptions& o, const core::CombustionResult& r) {
-  std::string how = "stoichiometric (no operating point given)";
-  if (!o.excess_air.empty()) how = fmt::format("given as excess air {}", o.excess_air);
-  if (!o.lambda.empty()) how = fmt::format("given as lambda {}", o.lambda);
-  if (!o.phi.empty()) how = fmt::format("given as phi {}", o.phi);
-  if (!o.flue_o2.empty()) how = fmt::format("solved from flue O2 {} ({})", o.flue_o2, o.flue_o2_basis);
-  return how + fmt::format("; excess air {:.2f} %, lambda {:.4f}, phi {:.4f}", r.excess_air() * 100.0, r.air_ratio,
-                           r.equivalence_ratio());
 }
 
 // ---------------------------------------------------------------------------------------------------
@@ -262,8 +154,11 @@ std::string composition_text(const std::vector<std::pair<std::string, double>>& 
 
 std::string line(std::string_view label, const std::string& value) { return fmt::format("  {:<30}{}\n", label, value); }
 
-std::string text_report(const FuelOptions& o, const core::Fuel& fuel, const core::Oxidant& oxidant,
-                        const core::CombustionResult& r, const std::optional<core::CombustionRates>& rates) {
+std::string text_report(const FuelAnswer& answer) {
+  const core::Fuel& fuel = answer.fuel;
+  const core::Oxidant& oxidant = answer.oxidant;
+  const core::CombustionResult& r = answer.result;
+  const std::optional<core::CombustionRates>& rates = answer.rates;
   const double vn = nm3_per_mol();
   const double hhv = r.hhv_J_per_kg;
   std::string t = "stackbound fuel: complete-combustion estimate\n\n";
@@ -296,7 +191,7 @@ std::string text_report(const FuelOptions& o, const core::Fuel& fuel, const core
   t += line("composition (mole, wet)", composition_text(ox));
   t += line("dry air", std::string(core::standard_dry_air_source()));
 
-  t += fmt::format("\nOperating point: {}\n", operating_point_text(o, r));
+  t += fmt::format("\nOperating point: {}\n", answer.operating_point);
 
   t += "\nStoichiometry, per kg of fuel\n";
   t += line("theoretical air (dry)", fmt::format("{:.4f} kg/kg   {:.4f} Nm3/kg", r.stoichiometric_air_kg_per_kg,
@@ -376,97 +271,8 @@ std::string text_report(const FuelOptions& o, const core::Fuel& fuel, const core
     t += "\nWarnings\n";
     for (const std::string& w : r.warnings) t += fmt::format("  - {}\n", w);
   }
-  t += fmt::format("\n{}\n", kCaution);
+  t += fmt::format("\n{}\n", kFuelCaution);
   return t;
-}
-
-nlohmann::json fractions_json(const std::vector<std::pair<std::string, double>>& fractions) {
-  nlohmann::json object = nlohmann::json::object();
-  for (const auto& [name, x] : fractions) object[name] = x;
-  return object;
-}
-
-nlohmann::json json_report(const FuelOptions& o, const core::Fuel& fuel, const core::Oxidant& oxidant,
-                           const core::CombustionResult& r, const std::optional<core::CombustionRates>& rates) {
-  const double vn = nm3_per_mol();
-  const double hhv = r.hhv_J_per_kg;
-  const core::AsFiredAnalysis a = fuel.as_fired_analysis();
-  nlohmann::json fuel_json = {
-      {"name", fuel.name()},
-      {"state", core::to_string(fuel.state())},
-      {"source", fuel.source()},
-      {"heating_value_method", fuel.heating_value_method()},
-      {"temperature_K", r.fuel_temperature_K},
-      {"as_fired_mass_percent",
-       {{"C", a.carbon_percent}, {"H", a.hydrogen_percent}, {"O", a.oxygen_percent}, {"N", a.nitrogen_percent},
-        {"S", a.sulfur_percent}, {"ash", a.ash_percent}, {"moisture", a.moisture_percent}, {"other", a.other_percent}}}};
-  if (!fuel.mole_fractions().empty()) fuel_json["mole_fractions"] = fractions_json(fuel.mole_fractions());
-  if (const auto m = fuel.molar_mass_kg_per_mol()) {
-    fuel_json["molar_mass_g_per_mol"] = *m * 1e3;
-    fuel_json["hhv_MJ_per_Nm3"] = hhv * *m / vn * 1e-6;
-    fuel_json["lhv_MJ_per_Nm3"] = r.lhv_J_per_kg * *m / vn * 1e-6;
-    fuel_json["hhv_Btu_per_scf"] = units::convert_from_si(hhv * *m, Dimension::molar_energy, "Btu/scf");
-  }
-  nlohmann::json oxidant_json = {{"description", oxidant.description()},
-                                 {"temperature_K", oxidant.temperature_K()},
-                                 {"dry_air_source", core::standard_dry_air_source()},
-                                 {"humidity", oxidant.humidity().description()}};
-  for (std::size_t i = 0; i < core::kOxidantSpeciesCount; ++i) {
-    oxidant_json["mole_fractions"][std::string(core::kOxidantSpeciesNames[i])] = oxidant.mole_fractions()[i];
-  }
-  const double wet_mol = r.flue.total_mol_per_kg(core::GasBasis::wet);
-  const double dry_mol = r.flue.total_mol_per_kg(core::GasBasis::dry);
-  nlohmann::json out = {
-      {"fuel", fuel_json},
-      {"oxidant", oxidant_json},
-      {"hhv_MJ_per_kg", hhv * 1e-6},
-      {"lhv_MJ_per_kg", r.lhv_J_per_kg * 1e-6},
-      {"operating_point", operating_point_text(o, r)},
-      {"excess_air_percent", r.excess_air() * 100.0},
-      {"lambda", r.air_ratio},
-      {"phi", r.equivalence_ratio()},
-      {"stoichiometric_air_kg_per_kg", r.stoichiometric_air_kg_per_kg},
-      {"stoichiometric_air_Nm3_per_kg", r.stoichiometric_oxidant_mol_per_kg * (1.0 - oxidant.water_mole_fraction()) * vn},
-      {"oxidant_kg_per_kg", r.oxidant_kg_per_kg},
-      {"oxidant_mol_per_kg", r.oxidant_mol_per_kg},
-      {"flue_gas_wet", fractions_json(r.flue.mole_fractions(core::GasBasis::wet))},
-      {"flue_gas_dry", fractions_json(r.flue.mole_fractions(core::GasBasis::dry))},
-      {"flue_o2_dry", r.flue_o2_dry},
-      {"flue_o2_wet", r.flue_o2_wet},
-      {"flue_co2_dry", r.flue_co2_dry},
-      {"moisture_fraction", r.moisture_fraction},
-      {"flue_gas_mol_per_kg", {{"wet", wet_mol}, {"dry", dry_mol}}},
-      {"flue_gas_Nm3_per_kg", {{"wet", wet_mol * vn}, {"dry", dry_mol * vn}}},
-      {"flue_gas_kg_per_kg",
-       {{"wet", r.flue.mass_kg_per_kg(core::GasBasis::wet)}, {"dry", r.flue.mass_kg_per_kg(core::GasBasis::dry)}}},
-      {"flue_gas_Nm3_per_GJ_hhv", {{"wet", wet_mol * vn / hhv * 1e9}, {"dry", dry_mol * vn / hhv * 1e9}}},
-      {"normal_conditions", units::normal_0C().description},
-      {"water_dew_point_K", r.water_dew_point_K ? nlohmann::json(*r.water_dew_point_K) : nlohmann::json(nullptr)},
-      {"flue_pressure_Pa", r.flue_pressure_Pa},
-      {"Fd_dscf_per_MMBtu", r.f_factors.fd_dscf_per_MMBtu()},
-      {"Fw_wscf_per_MMBtu", r.f_factors.fw_wscf_per_MMBtu()},
-      {"Fc_scf_per_MMBtu", r.f_factors.fc_scf_per_MMBtu()},
-      {"Fd_m3_per_GJ", r.f_factors.fd_m3_per_GJ()},
-      {"Fw_m3_per_GJ", r.f_factors.fw_m3_per_GJ()},
-      {"Fc_m3_per_GJ", r.f_factors.fc_m3_per_GJ()},
-      {"f_factor_conditions", "US EPA Method 19 definitions; 20 degC (68 degF), 101.325 kPa; HHV"},
-      {"warnings", r.warnings},
-      {"caution", caution_one_line()},
-  };
-  if (rates) {
-    const core::CombustionRates& q = *rates;
-    out["feed"] = {{"given", q.feed.given},
-                   {"fuel_kg_per_h", q.feed.mass_flow_kg_per_s * 3600.0},
-                   {"heat_input_hhv_MW", q.feed.heat_input_hhv_W * 1e-6},
-                   {"heat_input_lhv_MW", q.feed.heat_input_lhv_W * 1e-6},
-                   {"oxidant_kg_per_h", q.oxidant_kg_per_s * 3600.0},
-                   {"flue_gas_wet_Nm3_per_h", q.flue_wet_mol_per_s * vn * 3600.0},
-                   {"flue_gas_dry_Nm3_per_h", q.flue_dry_mol_per_s * vn * 3600.0},
-                   {"flue_gas_kg_per_h", q.flue_kg_per_s * 3600.0},
-                   {"ash_kg_per_h", q.ash_kg_per_s * 3600.0}};
-    if (q.feed.molar_flow_mol_per_s) out["feed"]["fuel_Nm3_per_h"] = *q.feed.molar_flow_mol_per_s * vn * 3600.0;
-  }
-  return out;
 }
 
 std::string presets_listing(std::string_view format) {
@@ -490,25 +296,8 @@ void run(const FuelOptions& o, const GlobalOptions& global) {
     return;
   }
   const core::SpeciesDatabase db = species_database(global.species_file);
-  const FuelInput input = build_fuel(o, db);
-  const core::Fuel& fuel = *input.fuel;
-  const core::Oxidant oxidant = build_oxidant(o);
-  const core::OperatingPoint op = build_operating_point(o, input.file_temperature_K);
-  const core::CombustionResult result = core::burn(fuel, oxidant, op, db);
-  const core::HeatInputBasis basis = o.heat_basis == "lhv" ? core::HeatInputBasis::lhv : core::HeatInputBasis::hhv;
-  std::optional<core::CombustionRates> rates;
-  if (!o.rate.empty()) {
-    const units::ParsedQuantity rate =
-        units::parse_quantity(o.rate, "--rate", {Dimension::mass_flow, Dimension::molar_flow, Dimension::power});
-    if (const auto problem = cases::outside(rate.value_si, cases::feed_range(rate.dimension))) {
-      throw units::InputError(fmt::format("--rate = \"{}\": {}", o.rate, *problem));
-    }
-    rates = core::rates(result, core::resolve_feed(fuel, rate, basis, "--rate"));
-  } else if (input.file_rate) {
-    rates = core::rates(result, core::resolve_feed(fuel, *input.file_rate, basis, "fuel.feed_rate"));
-  }
-  write_output(o.output, o.format == "json" ? render::json_text(json_report(o, fuel, oxidant, result, rates))
-                                            : text_report(o, fuel, oxidant, result, rates));
+  const FuelAnswer answer = burn_fuel_query(build_fuel(o, db), o.conditions, db);
+  write_output(o.output, o.format == "json" ? render::json_text(render::fuel_json(answer)) : text_report(answer));
 }
 
 }  // namespace
@@ -556,25 +345,25 @@ void add_fuel_command(CLI::App& app, const GlobalOptions& global) {
   command->add_option("--lhv", o->lhv, "Measured LHV of an --ultimate fuel, on the analysis basis");
   command->add_option("--estimate", o->estimate, "Estimate the HHV by a published correlation instead")
       ->check(CLI::IsMember({"channiwala_parikh", "boie"}));
-  command->add_option("--excess-air", o->excess_air, "Excess air, e.g. 15% (negative: sub-stoichiometric)");
-  command->add_option("--lambda", o->lambda, "Air ratio lambda (actual / stoichiometric air), e.g. 1.15");
-  command->add_option("--phi", o->phi, "Equivalence ratio phi = 1/lambda");
-  command->add_option("--flue-o2", o->flue_o2, "Measured flue O2, e.g. \"3 %\"; the excess air is solved from it");
-  command->add_option("--flue-o2-basis", o->flue_o2_basis, "Basis of --flue-o2")
+  command->add_option("--excess-air", o->conditions.excess_air, "Excess air, e.g. 15% (negative: sub-stoichiometric)");
+  command->add_option("--lambda", o->conditions.lambda, "Air ratio lambda (actual / stoichiometric air), e.g. 1.15");
+  command->add_option("--phi", o->conditions.phi, "Equivalence ratio phi = 1/lambda");
+  command->add_option("--flue-o2", o->conditions.flue_o2, "Measured flue O2, e.g. \"3 %\"; the excess air is solved from it");
+  command->add_option("--flue-o2-basis", o->conditions.flue_o2_basis, "Basis of --flue-o2")
       ->check(CLI::IsMember({"dry", "wet"}))
       ->capture_default_str();
-  command->add_option("--air-temperature", o->air_temperature, "Air temperature at the burner (preheat); default 25 degC");
-  command->add_option("--relative-humidity", o->relative_humidity, "Relative humidity of the ambient air, e.g. 60%");
-  command->add_option("--ambient-temperature", o->ambient_temperature,
+  command->add_option("--air-temperature", o->conditions.air_temperature, "Air temperature at the burner (preheat); default 25 degC");
+  command->add_option("--relative-humidity", o->conditions.relative_humidity, "Relative humidity of the ambient air, e.g. 60%");
+  command->add_option("--ambient-temperature", o->conditions.ambient_temperature,
                       "Where the relative humidity was measured; default 15 degC");
-  command->add_option("--ambient-pressure", o->ambient_pressure, "Ambient pressure for the humidity; default 1 atm");
-  command->add_option("--humidity-ratio", o->humidity_ratio, "Instead: kg water per kg dry air, e.g. 0.0085");
-  command->add_option("--o2-enrichment", o->o2_enrichment, "Dry O2 content of the oxidant after adding O2, e.g. 25%");
-  command->add_option("--fuel-temperature", o->fuel_temperature, "Fuel temperature at the burner; default 25 degC");
-  command->add_option("--pressure", o->pressure, "Flue gas pressure for the dew point; default 1 atm");
-  command->add_option("--rate", o->rate,
+  command->add_option("--ambient-pressure", o->conditions.ambient_pressure, "Ambient pressure for the humidity; default 1 atm");
+  command->add_option("--humidity-ratio", o->conditions.humidity_ratio, "Instead: kg water per kg dry air, e.g. 0.0085");
+  command->add_option("--o2-enrichment", o->conditions.o2_enrichment, "Dry O2 content of the oxidant after adding O2, e.g. 25%");
+  command->add_option("--fuel-temperature", o->conditions.fuel_temperature, "Fuel temperature at the burner; default 25 degC");
+  command->add_option("--pressure", o->conditions.pressure, "Flue gas pressure for the dew point; default 1 atm");
+  command->add_option("--rate", o->conditions.rate,
                       "Fuel feed: \"1.2 t/h\", \"850 Nm3/h\", \"680 scfm\" (gas), \"25 MW\", \"2.5 MMBtu/h\"");
-  command->add_option("--heat-basis", o->heat_basis, "Heating value a heat-input --rate refers to")
+  command->add_option("--heat-basis", o->conditions.heat_basis, "Heating value a heat-input --rate refers to")
       ->check(CLI::IsMember({"hhv", "lhv"}))
       ->capture_default_str();
   command->add_flag("--list-presets", o->list_presets, "List the fuel presets with their sources");

@@ -18,8 +18,6 @@ using namespace stackbound::cases;
 
 namespace {
 
-constexpr std::size_t kDefaultMaxSweepPoints = 10'000'000;
-
 struct SweepCli {
   std::string case_file;
   std::vector<std::string> vary;
@@ -28,24 +26,6 @@ struct SweepCli {
   unsigned threads = 0;
   std::size_t max_points = kDefaultMaxSweepPoints;
 };
-
-// The total points of the grid, checked against the cap before any work: a grid of 31623 x 31623
-// points would otherwise stream until the disk fills. The product saturates instead of overflowing.
-std::size_t checked_sweep_size(const std::vector<VarySpec>& vary, std::size_t max_points) {
-  std::size_t total = 1;
-  std::string grid;
-  for (const VarySpec& spec : vary) {
-    const std::size_t n = spec.values.size();
-    total = (n != 0 && total > max_points / n) ? max_points + 1 : total * n;
-    grid += (grid.empty() ? "" : " x ") + std::to_string(n);
-  }
-  if (total > max_points) {
-    throw units::InputError(fmt::format("--vary: the grid of {} points exceeds the cap of {} points; use fewer STEPS, "
-                                        "or raise the cap with --max-points",
-                                        grid, max_points));
-  }
-  return total;
-}
 
 void run(const SweepCli& cli, const GlobalOptions& global) {
   std::vector<VarySpec> vary;

@@ -7,14 +7,14 @@
 namespace stackbound::render {
 namespace {
 
-void require_finite_json(const nlohmann::json& value, const std::string& path) {
+void require_finite_at(const nlohmann::json& value, const std::string& path) {
   if (value.is_number_float() && !std::isfinite(value.get<double>())) {
     throw NonFiniteFigure("the figure at JSON path " + path + " is not finite");
   }
   if (value.is_object()) {
-    for (const auto& [key, item] : value.items()) require_finite_json(item, path + "." + key);
+    for (const auto& [key, item] : value.items()) require_finite_at(item, path + "." + key);
   } else if (value.is_array()) {
-    for (std::size_t i = 0; i < value.size(); ++i) require_finite_json(value[i], path + "[" + std::to_string(i) + "]");
+    for (std::size_t i = 0; i < value.size(); ++i) require_finite_at(value[i], path + "[" + std::to_string(i) + "]");
   }
 }
 
@@ -43,8 +43,10 @@ void require_finite_text(std::string_view text, const std::string& where) {
 
 }  // namespace
 
+void require_finite_json(const nlohmann::json& document) { require_finite_at(document, "$"); }
+
 std::string json_text(const nlohmann::json& document) {
-  require_finite_json(document, "$");
+  require_finite_json(document);
   return document.dump(2) + "\n";
 }
 

@@ -19,6 +19,9 @@ class NonFiniteFigure : public std::logic_error {
   using std::logic_error::logic_error;
 };
 
+// Throws NonFiniteFigure naming the JSON path of the first number of `document` that is not finite.
+void require_finite_json(const nlohmann::json& document);
+
 // The JSON text of `document` (indent 2, final newline). Throws NonFiniteFigure naming the JSON path of
 // the first number that is not finite (the JSON library would print it as null).
 [[nodiscard]] std::string json_text(const nlohmann::json& document);
