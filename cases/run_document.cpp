@@ -200,13 +200,22 @@ ReportTable post_flame_table(const RunResult& r) {
 ReportTable limits_table(const Screening& s) {
   ReportTable limits;
   limits.title = "Screening against the stated limits";
-  limits.columns = {"pollutant", "stated limit", "bound on the limit's basis", "share of limit", "outcome"};
+  limits.columns = {"pollutant", "stated limit", "source", "value on the limit's basis", "share of limit", "reading"};
   for (const LimitScreening& l : s.limits) {
-    limits.rows.push_back({l.pollutant, l.limit_text, fmt::format("{} {}", num(l.result.value), l.result.unit),
-                           fmt::format("{:.1f} %", l.result.fraction_of_limit * 100.0),
-                           std::string(em::screening_outcome_name(l.result.outcome))});
+    limits.rows.push_back({l.pollutant, l.limit_text, std::string(em::screening_source_name(l.source)),
+                           fmt::format("{} {}", num(l.result.value), l.result.unit),
+                           fmt::format("{:.1f} %", l.result.fraction_of_limit * 100.0), l.reading});
   }
-  for (const LimitScreening& l : s.limits) limits.notes.push_back(l.result.wording);
+  for (std::size_t i = 0; i < s.limits.size(); ++i) {
+    if (i == 0 || s.limits[i].limit_index != s.limits[i - 1].limit_index) {
+      limits.notes.push_back(fmt::format("{} ({}): {}.", s.limits[i].pollutant, s.limits[i].limit_text,
+                                         s.limits[i].conclusion));
+    }
+  }
+  limits.notes.push_back(
+      "Each value is converted to the limit's basis: measured values with the measured O2 (rates by Method 19 with "
+      "the fuel's Fd), the estimate, ceiling and bound with the model's stack gas. A screening comparison, not a "
+      "compliance determination.");
   return limits;
 }
 

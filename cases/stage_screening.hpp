@@ -14,13 +14,20 @@
 #include "stackbound/cases/stage_stack.hpp"
 #include "stackbound/core/species_database.hpp"
 #include "stackbound/emissions/limit_screening.hpp"
+#include "stackbound/emissions/screening_reading.hpp"
 
 namespace stackbound::cases {
 
+// One row of the screening: one value (measured, estimate, ceiling or bound) against one stated limit,
+// on the limit's basis. A limit has a row per source it has a value for, in that order.
 struct LimitScreening {
   std::string pollutant;
   std::string limit_text;
+  std::size_t limit_index = 0;  // in report.limits
+  emissions::ScreeningSource source = emissions::ScreeningSource::bound;
   emissions::ScreeningResult result;
+  std::string reading;     // this row's words (emissions/screening_reading.hpp)
+  std::string conclusion;  // the limit's conclusion from all its rows (the same on each of them)
 };
 
 // A measured value set beside the equilibrium bound on the same basis.

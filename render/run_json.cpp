@@ -174,6 +174,8 @@ nlohmann::json run_json(const RunResult& r) {
   for (const LimitScreening& l : r.screening.limits) {
     limits.push_back({{"pollutant", l.pollutant},
                       {"limit", l.limit_text},
+                      {"limit_index", l.limit_index},
+                      {"source", em::screening_source_name(l.source)},
                       {"value", l.result.value},
                       {"limit_value", l.result.limit},
                       {"unit", l.result.unit},
@@ -181,7 +183,9 @@ nlohmann::json run_json(const RunResult& r) {
                       {"margin", l.result.margin},
                       {"fraction_of_limit", l.result.fraction_of_limit},
                       {"outcome", em::screening_outcome_name(l.result.outcome)},
-                      {"wording", l.result.wording}});
+                      {"wording", l.result.wording},
+                      {"reading", l.reading},
+                      {"conclusion", l.conclusion}});
   }
   json measured = json::array();
   for (const MeasuredComparison& m : r.screening.measured) {
