@@ -1,14 +1,33 @@
 #include "stackbound/cases/comparison.hpp"
 
+#include <algorithm>
 #include <cmath>
 
 #include <fmt/format.h>
 
 #include "stackbound/cases/case_file.hpp"
 #include "stackbound/cases/run_document.hpp"
+#include "stackbound/emissions/cautions.hpp"
 #include "stackbound/units/input_error.hpp"
 
 namespace stackbound::cases {
+
+namespace {
+
+// The cautions any of the runs carries, once each, in the order of all_cautions().
+std::vector<std::string> cautions_of(const std::vector<RunResult>& runs) {
+  std::vector<std::string> cautions;
+  for (const emissions::CautionText& entry : emissions::all_cautions()) {
+    const bool carried = std::any_of(runs.begin(), runs.end(), [&](const RunResult& run) {
+      const std::vector<std::string>& keys = run.screening.caution_keys;
+      return std::find(keys.begin(), keys.end(), entry.key) != keys.end();
+    });
+    if (carried) cautions.emplace_back(entry.text);
+  }
+  return cautions;
+}
+
+}  // namespace
 
 // Relative difference against the first case; none when the first is zero.
 std::optional<double> relative_difference(double value, double first) {
@@ -22,6 +41,7 @@ Comparison compare(const std::vector<std::string>& files, const core::SpeciesDat
     LoadedCase loaded = load_case_file(file);
     comparison.runs.push_back(with_positions(loaded.sources, [&] { return run_case(std::move(loaded.definition), database); }));
   }
+  comparison.cautions = cautions_of(comparison.runs);
   comparison.columns = run_metric_columns(comparison.runs.front());
   for (const RunResult& run : comparison.runs) comparison.values.push_back(run_metric_values(run));
   for (std::size_t i = 1; i < comparison.runs.size(); ++i) {
@@ -85,7 +105,7 @@ Report comparison_document(const Comparison& c) {
       report.flags.push_back(fmt::format("Case {}: {}", static_cast<char>('A' + i), finding));
     }
   }
-  report.cautions = c.runs.front().screening.cautions;
+  report.cautions = c.cautions;
   return report;
 }
 

@@ -17,6 +17,7 @@ struct Comparison {
   std::vector<MetricColumn> columns;         // of the first run
   std::vector<std::vector<double>> values;   // per run, in the columns' order
   std::vector<std::string> flags;
+  std::vector<std::string> cautions;         // of every case, once each, in the order of all_cautions()
 };
 
 // Runs every case file (run errors reported at their file positions); throws units::InputError when
@@ -26,7 +27,7 @@ Comparison compare(const std::vector<std::string>& files, const core::SpeciesDat
 // Relative difference against the first case; none when the first is zero.
 std::optional<double> relative_difference(double value, double first);
 
-// The side-by-side table, the flags of every case, and the first case's cautions.
+// The side-by-side table, the flags of every case, and the cautions.
 Report comparison_document(const Comparison& comparison);
 
 }  // namespace stackbound::cases

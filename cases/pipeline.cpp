@@ -42,7 +42,7 @@ RunResult run_case(CaseDefinition definition, const core::SpeciesDatabase& datab
   EmissionFigures figures =
       run.emissions ? emissions_stage(definition, resolved, fired, stack, emission_options, &post_flame) : previous->emissions;
   Screening screening =
-      run.screening ? screening_stage({definition, resolved, fired, stack, figures}, database) : Screening{};
+      run.screening ? screening_stage({definition, resolved, fired, stack, figures, post_flame}, database) : Screening{};
   return {std::move(definition),
           std::move(resolved),
           std::move(fired),

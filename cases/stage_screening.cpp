@@ -280,11 +280,22 @@ std::vector<std::string> assumptions_of(const ScreeningInput& in, const core::Sp
   };
 }
 
-// The standard cautions, the O2-correction one, and "confirm against your permit" for a preset.
-void add_cautions(bool reference_o2_from_preset, Screening& screening) {
+// The standard cautions, then those that apply to this case, in the order all_cautions() lists them.
+void add_cautions(const ScreeningInput& in, Screening& screening) {
   std::vector<em::Caution> cautions(em::standard_cautions().begin(), em::standard_cautions().end());
   cautions.push_back(em::Caution::o2_correction_validity);
-  if (reference_o2_from_preset) cautions.push_back(em::Caution::confirm_presets);
+  if (in.figures.reference_o2_from_preset) cautions.push_back(em::Caution::confirm_presets);
+  const std::vector<em::Pollutant>& pollutants = in.definition.report.pollutants;
+  if (std::any_of(pollutants.begin(), pollutants.end(), [](const em::Pollutant& p) { return p.name == "CO"; })) {
+    cautions.push_back(em::Caution::co_well_mixed_only);
+  }
+  if (in.post_flame.fuel_nitrogen.no.fuel_nitrogen_mol_per_kg > 0.0) {
+    cautions.push_back(em::Caution::fuel_nitrogen_unbounded);
+  }
+  const em::ReferenceO2Preset* preset = in.definition.reference_o2_preset;
+  if (preset != nullptr && preset->key == "ied-gas-turbine" && !in.definition.firing.primary_zone) {
+    cautions.push_back(em::Caution::primary_zone_needed);
+  }
   for (const em::CautionText& entry : em::all_cautions()) {
     if (std::find(cautions.begin(), cautions.end(), entry.caution) != cautions.end()) {
       screening.cautions.emplace_back(entry.text);
@@ -306,7 +317,7 @@ Screening screening_stage(const ScreeningInput& in, const core::SpeciesDatabase&
   for (std::string& finding : model_findings(in)) screening.findings.push_back(std::move(finding));
   screening.warnings = warnings_of(in.resolved);
   screening.assumptions = assumptions_of(in, database);
-  add_cautions(in.figures.reference_o2_from_preset, screening);
+  add_cautions(in, screening);
   return screening;
 }
 

@@ -10,6 +10,7 @@
 #include "stackbound/cases/case_definition.hpp"
 #include "stackbound/cases/stage_emissions.hpp"
 #include "stackbound/cases/stage_fire.hpp"
+#include "stackbound/cases/stage_post_flame.hpp"
 #include "stackbound/cases/stage_resolve.hpp"
 #include "stackbound/cases/stage_stack.hpp"
 #include "stackbound/core/species_database.hpp"
@@ -58,6 +59,7 @@ struct ScreeningInput {
   const FiringState& fired;
   const StackGas& stack;
   const EmissionFigures& figures;
+  const PostFlame& post_flame;
 };
 
 // Runs the stage. `database`: the species data of the run, named in the assumptions. Errors name the

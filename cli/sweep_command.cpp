@@ -68,7 +68,8 @@ void run(const SweepCli& cli, const GlobalOptions& global) {
   OutputStream out(cli.output);
   std::size_t failed = 0;
   if (cli.format == "csv") {
-    render::SweepCsvWriter writer([&out](std::string_view text) { out.write(text); }, vary);
+    render::SweepCsvWriter writer([&out](std::string_view text) { out.write(text); }, vary,
+                                  sweep_cautions(definition, vary));
     failed = run_sweep(definition, vary, database, [&](const SweepPoint& p) { writer.add(p); }, options);
     writer.finish();
   } else {

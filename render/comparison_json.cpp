@@ -33,7 +33,7 @@ nlohmann::json comparison_json(const Comparison& c) {
   nlohmann::json units = nlohmann::json::object();
   for (const MetricColumn& column : c.columns) units[column.key] = column.header;
   return {{"bound_statement", kBoundStatement}, {"cases", cases},      {"columns", units},
-          {"flags", c.flags},                    {"cautions", c.runs.front().screening.cautions}};
+          {"flags", c.flags},                    {"cautions", c.cautions}};
 }
 
 }  // namespace stackbound::render
