@@ -278,6 +278,41 @@ ReportTable species_table(const FiringState& fired) {
   return species;
 }
 
+std::string optional_cell(const std::optional<double>& value) { return value ? num(*value) : "-"; }
+
+// The figures an engineer reads first, per pollutant on the permit's basis.
+ReportTable headline_table(const Screening& s) {
+  ReportTable table;
+  table.title = "Headline: each pollutant on the permit's basis";
+  table.columns = {"pollutant", "unit and basis", "estimate", "ceiling", "bound", "measured", "stated limit"};
+  for (const HeadlineRow& h : s.headline) {
+    table.rows.push_back({h.pollutant, h.basis.empty() ? h.unit : fmt::format("{} ({})", h.unit, h.basis),
+                          optional_cell(h.estimate), optional_cell(h.ceiling), num(h.bound),
+                          optional_cell(h.measured), optional_cell(h.limit)});
+    if (!h.reading.empty()) table.notes.push_back(fmt::format("{}: {}.", h.pollutant, h.reading));
+  }
+  table.notes.push_back("Estimate: post-flame kinetics (not conservative); ceiling: the most the modelled path gives; bound: "
+                 "equilibrium at the stated firing conditions; measured: as stated in the case file, on the same "
+                 "basis. Without a stated limit the basis is mg/Nm3 dry at the reference O2. Details and cautions "
+                 "follow.");
+  return table;
+}
+
+std::vector<ReportBarChart> headline_charts(const Screening& s) {
+  std::vector<ReportBarChart> charts;
+  for (const HeadlineRow& h : s.headline) {
+    ReportBarChart chart{h.basis.empty() ? fmt::format("{} [{}]", h.pollutant, h.unit)
+                                         : fmt::format("{} [{}, {}]", h.pollutant, h.unit, h.basis),
+                         {}, h.limit};
+    if (h.estimate) chart.bars.emplace_back("estimate", *h.estimate);
+    if (h.ceiling) chart.bars.emplace_back("ceiling", *h.ceiling);
+    chart.bars.emplace_back("bound", h.bound);
+    if (h.measured) chart.bars.emplace_back("measured", *h.measured);
+    charts.push_back(std::move(chart));
+  }
+  return charts;
+}
+
 }  // namespace
 
 Report run_document(const RunResult& r) {
@@ -287,6 +322,8 @@ Report run_document(const RunResult& r) {
       "CO and NO figures are the {}: a screening estimate from chemical equilibrium, not a measurement and not a "
       "compliance determination.{}",
       kBoundStatement, r.definition.description.empty() ? "" : " " + r.definition.description);
+  report.headline = headline_table(r.screening);
+  report.headline_charts = headline_charts(r.screening);
   report.summary = summary(r);
   report.tables.push_back(bounds_table(r));
   report.tables.push_back(post_flame_table(r));

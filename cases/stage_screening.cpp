@@ -3,6 +3,7 @@
 #include <fmt/format.h>
 
 #include <algorithm>
+#include <cctype>
 #include <cmath>
 
 #include "stackbound/cases/source_map.hpp"
@@ -152,6 +153,51 @@ MeasuredComparison measured_o2(const MeasuredValue& o2, double measured_o2_dry, 
         row.measured, row.model, kO2MismatchPoints);
   }
   return row;
+}
+
+// A pollutant without a stated limit on mg/Nm3 dry at the reference O2 (the basis of the bound's
+// mg/Nm3 figure).
+HeadlineRow unlimited_headline(const PollutantBound& p, const ScreeningInput& in,
+                               const em::ConcentrationContext& measured_context) {
+  const em::Concentration& reference = p.emission.mg_per_Nm3_at_reference.result;
+  const std::string basis = reference.basis().text();
+  const auto value = [](const std::optional<PollutantFigure>& f) -> std::optional<double> {
+    if (!f) return std::nullopt;
+    return f->emission.mg_per_Nm3_at_reference.result.value();
+  };
+  HeadlineRow row{p.name, reference.basis().unit.symbol, basis.substr(reference.basis().unit.symbol.size() + 2),
+                  value(p.estimate), value(p.ceiling), reference.value(), std::nullopt, std::nullopt, ""};
+  if (const MeasuredValue* measured = measured_of(in.definition.stack.measured, p.name)) {
+    std::string field = "stack.measured.";
+    for (const char c : p.name) field += static_cast<char>(std::tolower(static_cast<unsigned char>(c)));
+    row.measured = at_field(field, [&] { return measured->value.to(reference.basis(), measured_context).value(); });
+  }
+  return row;
+}
+
+// The headline: per stated limit its rows on its basis, then the pollutants without a limit.
+std::vector<HeadlineRow> headline_of(const std::vector<LimitScreening>& limits, const ScreeningInput& in,
+                                     const em::ConcentrationContext& measured_context) {
+  std::vector<HeadlineRow> headline;
+  for (std::size_t i = 0; i < limits.size(); ++i) {
+    const LimitScreening& l = limits[i];
+    if (i == 0 || l.limit_index != limits[i - 1].limit_index) {
+      headline.push_back({l.pollutant, l.result.unit, l.result.basis, std::nullopt, std::nullopt, 0.0, std::nullopt,
+                          l.result.limit, l.conclusion});
+    }
+    HeadlineRow& row = headline.back();
+    switch (l.source) {
+      case em::ScreeningSource::measured: row.measured = l.result.value; break;
+      case em::ScreeningSource::estimate: row.estimate = l.result.value; break;
+      case em::ScreeningSource::ceiling: row.ceiling = l.result.value; break;
+      case em::ScreeningSource::bound: row.bound = l.result.value; break;
+    }
+  }
+  for (const PollutantBound& p : in.figures.pollutants) {
+    const bool limited = std::any_of(limits.begin(), limits.end(), [&](const LimitScreening& l) { return l.pollutant == p.name; });
+    if (!limited) headline.push_back(unlimited_headline(p, in, measured_context));
+  }
+  return headline;
 }
 
 MeasuredComparison measured_moisture(const MeasuredFraction& moisture, const StackGas& stack) {
@@ -311,6 +357,7 @@ Screening screening_stage(const ScreeningInput& in, const core::SpeciesDatabase&
   const em::ConcentrationContext measured_context = measured_context_of(in);
   screening.limits = screen_limits(in, measured_context);
   screening.measured = compare_measured(in, measured_context);
+  screening.headline = headline_of(screening.limits, in, measured_context);
   for (const MeasuredComparison& row : screening.measured) {
     if (!row.finding.empty()) screening.findings.push_back(row.finding);
   }

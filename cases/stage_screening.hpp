@@ -4,6 +4,7 @@
 // (where they disagree, and what the model itself shows: soot, rich firing, a stack near the dew
 // point), and the assumptions and cautions every report carries.
 
+#include <optional>
 #include <string>
 #include <vector>
 
@@ -42,7 +43,23 @@ struct MeasuredComparison {
   std::string finding;  // empty when consistent
 };
 
+// One line of the headline (the figures an engineer reads first), on the permit's basis: the stated
+// limit's, or for a pollutant without a limit mg/Nm3 dry at the reference O2. A pollutant with two
+// limits has two lines.
+struct HeadlineRow {
+  std::string pollutant;
+  std::string unit;                 // "mg/Nm3", "lb/MMBtu", "kg/h"
+  std::string basis;                // the rest of the basis ("dry, O2=3%, as NO2, normal=0C"; "" for rates)
+  std::optional<double> estimate;   // none for NO2, SO2 or when the kinetics could not run
+  std::optional<double> ceiling;
+  double bound = 0.0;
+  std::optional<double> measured;   // when stack.measured states the pollutant
+  std::optional<double> limit;      // when a limit is stated
+  std::string reading;              // the limit's conclusion; "" without a limit
+};
+
 struct Screening {
+  std::vector<HeadlineRow> headline;
   std::vector<LimitScreening> limits;
   std::vector<MeasuredComparison> measured;
   std::vector<std::string> findings;  // what the reader must look at

@@ -8,6 +8,7 @@
 namespace stackbound::render {
 
 using cases::PlotSeries;
+using cases::ReportBarChart;
 using cases::Report;
 using cases::ReportPlot;
 using cases::ReportTable;

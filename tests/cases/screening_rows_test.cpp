@@ -169,5 +169,50 @@ TEST(ScreeningRows, TextReportShowsTheRowsAndTheConclusion) {
   EXPECT_EQ(printed.out.find("compliant"), std::string::npos);
 }
 
+// Wrong if the headline lost a pollutant, put a figure on another basis than the limit's, or left out
+// the measured value or the limit's conclusion.
+TEST(ScreeningRows, HeadlineHoldsEachPollutantOnThePermitsBasis) {
+  const RunResult run = run_case(load_case(example("gas_boiler.yaml")), builtin_species());
+  const std::vector<HeadlineRow>& headline = run.screening.headline;
+  ASSERT_EQ(headline.size(), 3U);  // NOx and CO with their limits, then NO without one
+  EXPECT_EQ(headline[0].pollutant, "NOx");
+  EXPECT_EQ(headline[0].unit, "mg/Nm3");
+  EXPECT_EQ(headline[0].basis, "dry, O2=3%, as NO2, normal=0C");
+  const std::vector<LimitScreening> nox = rows_of(run, 0);
+  ASSERT_TRUE(headline[0].measured && headline[0].estimate && headline[0].ceiling && headline[0].limit);
+  EXPECT_TRUE(is_close(*headline[0].measured, nox[0].result.value, 0.0));
+  EXPECT_TRUE(is_close(*headline[0].estimate, nox[1].result.value, 0.0));
+  EXPECT_TRUE(is_close(*headline[0].ceiling, nox[2].result.value, 0.0));
+  EXPECT_TRUE(is_close(headline[0].bound, nox[3].result.value, 0.0));
+  EXPECT_TRUE(is_close(*headline[0].limit, 100.0, 0.0));
+  EXPECT_EQ(headline[0].reading, nox[0].conclusion);
+  EXPECT_EQ(headline[1].pollutant, "CO");
+  EXPECT_EQ(headline[2].pollutant, "NO");
+  EXPECT_EQ(headline[2].basis, "dry, O2=3%, normal=0C");
+  EXPECT_FALSE(headline[2].limit);
+  EXPECT_FALSE(headline[2].measured);  // the gas boiler states no measured NO
+  EXPECT_EQ(headline[2].reading, "");
+  EXPECT_TRUE(is_close(headline[2].bound, run.emissions.pollutants[1].emission.mg_per_Nm3_at_reference.result.value(), 0.0));
+}
+
+// Wrong if the text or HTML report did not open with the headline, before the summary and details.
+TEST(ScreeningRows, ReportsOpenWithTheHeadline) {
+  const auto text = testing::run_stackbound({"run", example("gas_boiler.yaml")});
+  ASSERT_EQ(text.exit_code, 0) << text.err;
+  const std::size_t headline = text.out.find("Headline: each pollutant on the permit's basis");
+  ASSERT_NE(headline, std::string::npos);
+  EXPECT_LT(headline, text.out.find("Case file"));
+  EXPECT_LT(headline, text.out.find("Screening against the stated limits"));
+  const auto html = testing::run_stackbound({"run", example("gas_boiler.yaml"), "--format", "html"});
+  ASSERT_EQ(html.exit_code, 0) << html.err;
+  const std::size_t section = html.out.find("<section class=\"headline\">");
+  ASSERT_NE(section, std::string::npos);
+  EXPECT_LT(section, html.out.find("<h2>Summary</h2>"));
+  const std::size_t chart = html.out.find("<svg", section);
+  ASSERT_NE(chart, std::string::npos);
+  EXPECT_LT(chart, html.out.find("<h2>Summary</h2>"));
+  EXPECT_NE(html.out.find("stated limit 100</text>", section), std::string::npos);
+}
+
 }  // namespace
 }  // namespace stackbound::cases
