@@ -1,5 +1,7 @@
 #include "stackbound/cases/case_file.hpp"
 
+#include "stackbound/cases/sha256.hpp"
+
 #include <algorithm>
 #include <array>
 #include <cmath>
@@ -327,6 +329,7 @@ LoadedCase parse_case_file(std::string_view text, const std::string& origin) {
   root.allow_only({"case", "fuel", "air", "operating_point", "firing", "post_flame", "stack", "report"});
   CaseDefinition& definition = loaded.definition;
   definition.origin = origin;
+  definition.source_sha256 = sha256_hex(text);
   const YamlField info = root.required("case");
   info.allow_only({"title", "description", "plant_type"});
   definition.title = info.required("title").text();

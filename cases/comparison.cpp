@@ -64,7 +64,7 @@ Comparison compare(const std::vector<std::string>& files, const core::SpeciesDat
   return comparison;
 }
 
-Report comparison_document(const Comparison& c) {
+Report comparison_document(const Comparison& c, const Provenance& provenance) {
   Report report;
   report.title = "Comparison of cases";
   report.subtitle = fmt::format("CO and NO figures are the {} of each case: screening estimates, not measurements "
@@ -72,8 +72,11 @@ Report comparison_document(const Comparison& c) {
                                 kBoundStatement);
   for (std::size_t i = 0; i < c.runs.size(); ++i) {
     report.summary.emplace_back(fmt::format("Case {}", static_cast<char>('A' + i)),
-                                fmt::format("{} ({})", c.runs[i].definition.title, c.runs[i].definition.origin));
+                                fmt::format("{} ({}; SHA-256 {})", c.runs[i].definition.title,
+                                            c.runs[i].definition.origin, c.runs[i].definition.source_sha256));
   }
+  report.summary.emplace_back("Tool version", fmt::format("stackbound {}", provenance.version));
+  report.summary.emplace_back("Run at", provenance.run_at);
   ReportTable table;
   table.title = "Side by side";
   table.columns.push_back("quantity");

@@ -9,6 +9,7 @@
 #include "stackbound/cases/report_document.hpp"
 #include "stackbound/cases/run_metrics.hpp"
 #include "stackbound/cases/pipeline.hpp"
+#include "stackbound/cases/provenance.hpp"
 
 namespace stackbound::cases {
 
@@ -28,6 +29,7 @@ Comparison compare(const std::vector<std::string>& files, const core::SpeciesDat
 std::optional<double> relative_difference(double value, double first);
 
 // The side-by-side table, the flags of every case, and the cautions.
-Report comparison_document(const Comparison& comparison);
+// `provenance`: the tool version and run time (its case_sha256 is not used: each case row names its own).
+Report comparison_document(const Comparison& comparison, const Provenance& provenance);
 
 }  // namespace stackbound::cases

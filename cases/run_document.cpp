@@ -315,7 +315,7 @@ std::vector<ReportBarChart> headline_charts(const Screening& s) {
 
 }  // namespace
 
-Report run_document(const RunResult& r) {
+Report run_document(const RunResult& r, const Provenance& provenance) {
   Report report;
   report.title = r.definition.title;
   report.subtitle = fmt::format(
@@ -325,6 +325,8 @@ Report run_document(const RunResult& r) {
   report.headline = headline_table(r.screening);
   report.headline_charts = headline_charts(r.screening);
   report.summary = summary(r);
+  const std::vector<std::pair<std::string, std::string>> stamp = provenance_summary(provenance);
+  report.summary.insert(report.summary.begin() + 1, stamp.begin(), stamp.end());
   report.tables.push_back(bounds_table(r));
   report.tables.push_back(post_flame_table(r));
   if (!r.screening.limits.empty()) report.tables.push_back(limits_table(r.screening));

@@ -156,7 +156,11 @@ nlohmann::json post_flame_json(const RunResult& r) {
 
 }  // namespace
 
-nlohmann::json run_json(const RunResult& r) {
+nlohmann::json provenance_json(const Provenance& p) {
+  return {{"version", p.version}, {"run_at", p.run_at}, {"case_sha256", p.case_sha256}};
+}
+
+nlohmann::json run_json(const RunResult& r, const Provenance& provenance) {
   using nlohmann::json;
   json mole_fractions = json::object();
   json moles = json::object();
@@ -205,6 +209,7 @@ nlohmann::json run_json(const RunResult& r) {
   return {
       {"case", {{"title", r.definition.title}, {"description", r.definition.description}, {"file", r.definition.origin},
                 {"plant_type", r.definition.plant_type}}},
+      {"provenance", provenance_json(provenance)},
       {"bound_statement", kBoundStatement},
       {"fuel",
        {{"name", r.resolved.fuel.name()},

@@ -32,13 +32,14 @@ void SweepHtmlCollector::add(const SweepPoint& point) {
   rows_.push_back(std::move(row));
 }
 
-Report SweepHtmlCollector::document(const CaseDefinition& definition) const {
+Report SweepHtmlCollector::document(const CaseDefinition& definition, const Provenance& provenance) const {
   Report report;
   report.title = "Sweep: " + definition.title;
   report.subtitle = fmt::format("CO and NO figures are the {} of each point: screening estimates from chemical "
                                 "equilibrium, not measurements and not compliance determinations.",
                                 kBoundStatement);
   report.summary.emplace_back("Case file", definition.origin);
+  for (auto& row : provenance_summary(provenance)) report.summary.push_back(std::move(row));
   for (const VarySpec& v : vary_) report.summary.emplace_back("Varied", v.text);
   report.summary.emplace_back("Points", fmt::format("{} ({} failed)", rows_.size(), failed_));
   const std::string x_label = sweep_parameter_label(vary_.front().parameter);
