@@ -16,7 +16,8 @@ nlohmann::json comparison_json(const Comparison& c, const Provenance& provenance
     for (std::size_t k = 0; k < c.columns.size(); ++k) {
       const double value = c.values[i][k];
       const double first = c.values[0][k];
-      if (is_missing(c.columns[k], value) || is_missing(c.columns[k], first)) {
+      if (is_missing(c.columns[k], value) || is_missing(c.columns[k], first) ||
+          (c.bases_differ && depends_on_reference_basis(c.columns[k]))) {
         values[c.columns[k].key] = is_missing(c.columns[k], value) ? nlohmann::json(nullptr) : nlohmann::json(value);
         differences[c.columns[k].key] = {{"absolute", nullptr}, {"relative", nullptr}};
         continue;
@@ -29,6 +30,7 @@ nlohmann::json comparison_json(const Comparison& c, const Provenance& provenance
                      {"file", c.runs[i].definition.origin},
                      {"title", c.runs[i].definition.title},
                      {"case_sha256", c.runs[i].definition.source_sha256},
+                     {"basis", c.bases[i]},
                      {"values", values},
                      {"difference_from_first", differences},
                      {"findings", c.runs[i].screening.findings}});
