@@ -1,16 +1,15 @@
 #include "stackbound/cases/case_file.hpp"
 
-#include "stackbound/cases/sha256.hpp"
+#include <fmt/format.h>
 
 #include <algorithm>
 #include <array>
 #include <cmath>
 
-#include <fmt/format.h>
-
 #include "stackbound/cases/fuel_spec.hpp"
 #include "stackbound/cases/input_file.hpp"
 #include "stackbound/cases/plausible_ranges.hpp"
+#include "stackbound/cases/sha256.hpp"
 #include "stackbound/cases/yaml_reader.hpp"
 #include "stackbound/emissions/basis.hpp"
 #include "stackbound/units/input_error.hpp"
@@ -304,7 +303,8 @@ ReportSpec report_spec(const YamlField& report) {
   }
   if (const auto hours = report.optional("operating_hours")) {
     spec.operating_hours_h = hours->quantity_si(Dimension::time) / 3600.0;
-    if (!(spec.operating_hours_h > 0.0 && spec.operating_hours_h <= 8784.0)) hours->fail("must be between 0 h and 8784 h a year");
+    if (!(spec.operating_hours_h > 0.0 && spec.operating_hours_h <= 8784.0))
+      hours->fail("must be between 0 h and 8784 h a year");
   }
   if (const auto limits = report.optional("limits")) {
     if (!limits->is_sequence()) limits->fail("expected a list of {pollutant, limit}");

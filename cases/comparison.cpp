@@ -1,9 +1,9 @@
 #include "stackbound/cases/comparison.hpp"
 
+#include <fmt/format.h>
+
 #include <algorithm>
 #include <cmath>
-
-#include <fmt/format.h>
 
 #include "stackbound/cases/case_file.hpp"
 #include "stackbound/cases/run_document.hpp"
@@ -59,7 +59,8 @@ void align(Comparison& c) {
   for (const RunResult& run : c.runs) columns.push_back(run_metric_columns(run, c.bases_differ));
   for (const std::vector<MetricColumn>& run_columns : columns) {
     for (const MetricColumn& column : run_columns) {
-      const bool known = std::any_of(c.columns.begin(), c.columns.end(), [&](const MetricColumn& k) { return k.key == column.key; });
+      const bool known =
+          std::any_of(c.columns.begin(), c.columns.end(), [&](const MetricColumn& k) { return k.key == column.key; });
       if (!known) c.columns.push_back(column);
     }
   }
@@ -67,7 +68,8 @@ void align(Comparison& c) {
     const std::vector<double> run_values = run_metric_values(c.runs[i]);
     std::vector<double> values;
     for (MetricColumn& column : c.columns) {
-      const auto found = std::find_if(columns[i].begin(), columns[i].end(), [&](const MetricColumn& k) { return k.key == column.key; });
+      const auto found = std::find_if(columns[i].begin(), columns[i].end(),
+                                      [&](const MetricColumn& k) { return k.key == column.key; });
       if (found == columns[i].end()) {
         column.may_be_missing = true;
         values.push_back(kMissingFigure);

@@ -6,10 +6,10 @@
 #include <string>
 #include <vector>
 
-#include "stackbound/cases/report_document.hpp"
-#include "stackbound/cases/run_metrics.hpp"
 #include "stackbound/cases/pipeline.hpp"
 #include "stackbound/cases/provenance.hpp"
+#include "stackbound/cases/report_document.hpp"
+#include "stackbound/cases/run_metrics.hpp"
 
 namespace stackbound::cases {
 
@@ -24,7 +24,7 @@ struct Comparison {
   std::vector<std::string> bases;            // per run: "@ 3 % O2 (20.9 % air), normal 0C"
   bool bases_differ = false;
   std::vector<std::string> flags;
-  std::vector<std::string> cautions;         // of every case, once each, in the order of all_cautions()
+  std::vector<std::string> cautions;  // of every case, once each, in the order of all_cautions()
 };
 
 // Runs every case file (run errors reported at their file positions) and aligns their figures.

@@ -21,7 +21,8 @@ struct Provenance {
 // "2026-12-03T18:49:07Z" (UTC, seconds truncated).
 [[nodiscard]] std::string format_run_time(std::chrono::system_clock::time_point run_at);
 
-[[nodiscard]] Provenance make_provenance(const CaseDefinition& definition, std::chrono::system_clock::time_point run_at);
+[[nodiscard]] Provenance make_provenance(const CaseDefinition& definition,
+                                         std::chrono::system_clock::time_point run_at);
 
 // "stackbound 0.1.0, run at 2026-12-03T18:49:07Z, case file SHA-256 9f86d0...": one line for text
 // and CSV outputs.

@@ -38,8 +38,8 @@ struct ReportPlot {
 // A bar chart of one pollutant's headline figures (drawn in HTML only): one bar per figure on a
 // logarithmic axis, the stated limit as a line across them.
 struct ReportBarChart {
-  std::string title;                                  // with the unit and basis of the bars
-  std::vector<std::pair<std::string, double>> bars;   // label -> value; values <= 0 are not drawn
+  std::string title;                                 // with the unit and basis of the bars
+  std::vector<std::pair<std::string, double>> bars;  // label -> value; values <= 0 are not drawn
   std::optional<double> limit;
 };
 

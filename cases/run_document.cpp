@@ -208,8 +208,8 @@ ReportTable limits_table(const Screening& s) {
   }
   for (std::size_t i = 0; i < s.limits.size(); ++i) {
     if (i == 0 || s.limits[i].limit_index != s.limits[i - 1].limit_index) {
-      limits.notes.push_back(fmt::format("{} ({}): {}.", s.limits[i].pollutant, s.limits[i].limit_text,
-                                         s.limits[i].conclusion));
+      limits.notes.push_back(
+          fmt::format("{} ({}): {}.", s.limits[i].pollutant, s.limits[i].limit_text, s.limits[i].conclusion));
     }
   }
   limits.notes.push_back(
@@ -287,14 +287,15 @@ ReportTable headline_table(const Screening& s) {
   table.columns = {"pollutant", "unit and basis", "estimate", "ceiling", "bound", "measured", "stated limit"};
   for (const HeadlineRow& h : s.headline) {
     table.rows.push_back({h.pollutant, h.basis.empty() ? h.unit : fmt::format("{} ({})", h.unit, h.basis),
-                          optional_cell(h.estimate), optional_cell(h.ceiling), num(h.bound),
-                          optional_cell(h.measured), optional_cell(h.limit)});
+                          optional_cell(h.estimate), optional_cell(h.ceiling), num(h.bound), optional_cell(h.measured),
+                          optional_cell(h.limit)});
     if (!h.reading.empty()) table.notes.push_back(fmt::format("{}: {}.", h.pollutant, h.reading));
   }
-  table.notes.push_back("Estimate: post-flame kinetics (not conservative); ceiling: the most the modelled path gives; bound: "
-                 "equilibrium at the stated firing conditions; measured: as stated in the case file, on the same "
-                 "basis. Without a stated limit the basis is mg/Nm3 dry at the reference O2. Details and cautions "
-                 "follow.");
+  table.notes.push_back(
+      "Estimate: post-flame kinetics (not conservative); ceiling: the most the modelled path gives; bound: "
+      "equilibrium at the stated firing conditions; measured: as stated in the case file, on the same "
+      "basis. Without a stated limit the basis is mg/Nm3 dry at the reference O2. Details and cautions "
+      "follow.");
   return table;
 }
 
@@ -303,7 +304,8 @@ std::vector<ReportBarChart> headline_charts(const Screening& s) {
   for (const HeadlineRow& h : s.headline) {
     ReportBarChart chart{h.basis.empty() ? fmt::format("{} [{}]", h.pollutant, h.unit)
                                          : fmt::format("{} [{}, {}]", h.pollutant, h.unit, h.basis),
-                         {}, h.limit};
+                         {},
+                         h.limit};
     if (h.estimate) chart.bars.emplace_back("estimate", *h.estimate);
     if (h.ceiling) chart.bars.emplace_back("ceiling", *h.ceiling);
     chart.bars.emplace_back("bound", h.bound);

@@ -1,11 +1,10 @@
 #include "stackbound/cases/sha256.hpp"
 
-#include <array>
-#include <cassert>
-#include <memory>
-
 #include <fmt/format.h>
 #include <openssl/evp.h>
+
+#include <array>
+#include <cassert>
 
 namespace stackbound::cases {
 

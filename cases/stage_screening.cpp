@@ -77,7 +77,8 @@ em::ScreeningResult screen_measured(const LimitSpec& limit, const MeasuredValue&
   if (rate.kind == em::RateKind::per_useful_output) refuse_output_limit(limit);
   em::ConcentrationContext method19_context = context;
   method19_context.o2_basis = em::O2Basis::us_epa_20_9;
-  const em::FFactor fd = em::FFactor::from_scm_per_J(em::FFactorKind::dry, in.resolved.combustion.f_factors.fd_m3_per_J);
+  const em::FFactor fd =
+      em::FFactor::from_scm_per_J(em::FFactorKind::dry, in.resolved.combustion.f_factors.fd_m3_per_J);
   const em::HeatInputRate per_heat = em::method19_o2_dry(measured.value, fd, method19_context);
   if (rate.kind == em::RateKind::per_heat_input) return em::screen_heat_input_rate(per_heat, rate);
   return em::screen_mass_rate(units::kilograms_per_second(per_heat.kg_per_J * in.resolved.rates.feed.heat_input_hhv_W),
@@ -86,7 +87,8 @@ em::ScreeningResult screen_measured(const LimitSpec& limit, const MeasuredValue&
 
 const PollutantBound& bound_for(const LimitSpec& limit, const std::vector<PollutantBound>& bounds,
                                 const std::string& field) {
-  const auto bound = std::find_if(bounds.begin(), bounds.end(), [&](const auto& p) { return p.name == limit.pollutant; });
+  const auto bound =
+      std::find_if(bounds.begin(), bounds.end(), [&](const auto& p) { return p.name == limit.pollutant; });
   if (bound == bounds.end()) {
     std::vector<std::string> names;
     for (const PollutantBound& p : bounds) names.push_back(p.name);
@@ -119,10 +121,18 @@ std::vector<LimitScreening> screen_one_limit(const ScreeningInput& in, std::size
   em::LimitOutcomes outcomes;
   for (const auto& [source, result] : results) {
     switch (source) {
-      case em::ScreeningSource::measured: outcomes.measured = result.outcome; break;
-      case em::ScreeningSource::estimate: outcomes.estimate = result.outcome; break;
-      case em::ScreeningSource::ceiling: outcomes.ceiling = result.outcome; break;
-      case em::ScreeningSource::bound: outcomes.bound = result.outcome; break;
+      case em::ScreeningSource::measured:
+        outcomes.measured = result.outcome;
+        break;
+      case em::ScreeningSource::estimate:
+        outcomes.estimate = result.outcome;
+        break;
+      case em::ScreeningSource::ceiling:
+        outcomes.ceiling = result.outcome;
+        break;
+      case em::ScreeningSource::bound:
+        outcomes.bound = result.outcome;
+        break;
     }
   }
   const std::string conclusion = em::screening_conclusion(outcomes, limit.pollutant);
@@ -165,8 +175,15 @@ HeadlineRow unlimited_headline(const PollutantBound& p, const ScreeningInput& in
     if (!f) return std::nullopt;
     return f->emission.mg_per_Nm3_at_reference.result.value();
   };
-  HeadlineRow row{p.name, reference.basis().unit.symbol, basis.substr(reference.basis().unit.symbol.size() + 2),
-                  value(p.estimate), value(p.ceiling), reference.value(), std::nullopt, std::nullopt, ""};
+  HeadlineRow row{p.name,
+                  reference.basis().unit.symbol,
+                  basis.substr(reference.basis().unit.symbol.size() + 2),
+                  value(p.estimate),
+                  value(p.ceiling),
+                  reference.value(),
+                  std::nullopt,
+                  std::nullopt,
+                  ""};
   if (const MeasuredValue* measured = measured_of(in.definition.stack.measured, p.name)) {
     std::string field = "stack.measured.";
     for (const char c : p.name) field += static_cast<char>(std::tolower(static_cast<unsigned char>(c)));
@@ -187,14 +204,23 @@ std::vector<HeadlineRow> headline_of(const std::vector<LimitScreening>& limits, 
     }
     HeadlineRow& row = headline.back();
     switch (l.source) {
-      case em::ScreeningSource::measured: row.measured = l.result.value; break;
-      case em::ScreeningSource::estimate: row.estimate = l.result.value; break;
-      case em::ScreeningSource::ceiling: row.ceiling = l.result.value; break;
-      case em::ScreeningSource::bound: row.bound = l.result.value; break;
+      case em::ScreeningSource::measured:
+        row.measured = l.result.value;
+        break;
+      case em::ScreeningSource::estimate:
+        row.estimate = l.result.value;
+        break;
+      case em::ScreeningSource::ceiling:
+        row.ceiling = l.result.value;
+        break;
+      case em::ScreeningSource::bound:
+        row.bound = l.result.value;
+        break;
     }
   }
   for (const PollutantBound& p : in.figures.pollutants) {
-    const bool limited = std::any_of(limits.begin(), limits.end(), [&](const LimitScreening& l) { return l.pollutant == p.name; });
+    const bool limited =
+        std::any_of(limits.begin(), limits.end(), [&](const LimitScreening& l) { return l.pollutant == p.name; });
     if (!limited) headline.push_back(unlimited_headline(p, in, measured_context));
   }
   return headline;

@@ -48,14 +48,14 @@ struct MeasuredComparison {
 // limits has two lines.
 struct HeadlineRow {
   std::string pollutant;
-  std::string unit;                 // "mg/Nm3", "lb/MMBtu", "kg/h"
-  std::string basis;                // the rest of the basis ("dry, O2=3%, as NO2, normal=0C"; "" for rates)
-  std::optional<double> estimate;   // none for NO2, SO2 or when the kinetics could not run
+  std::string unit;                // "mg/Nm3", "lb/MMBtu", "kg/h"
+  std::string basis;               // the rest of the basis ("dry, O2=3%, as NO2, normal=0C"; "" for rates)
+  std::optional<double> estimate;  // none for NO2, SO2 or when the kinetics could not run
   std::optional<double> ceiling;
   double bound = 0.0;
-  std::optional<double> measured;   // when stack.measured states the pollutant
-  std::optional<double> limit;      // when a limit is stated
-  std::string reading;              // the limit's conclusion; "" without a limit
+  std::optional<double> measured;  // when stack.measured states the pollutant
+  std::optional<double> limit;     // when a limit is stated
+  std::string reading;             // the limit's conclusion; "" without a limit
 };
 
 struct Screening {

@@ -179,7 +179,8 @@ void apply_parameter(CaseDefinition& definition, SweepParameter parameter, doubl
 }
 
 std::vector<emissions::Caution> sweep_cautions(const CaseDefinition& definition, const std::vector<VarySpec>& vary) {
-  std::vector<emissions::Caution> cautions(emissions::standard_cautions().begin(), emissions::standard_cautions().end());
+  std::vector<emissions::Caution> cautions(emissions::standard_cautions().begin(),
+                                           emissions::standard_cautions().end());
   const auto moves_flame_temperature = [](const VarySpec& v) {
     switch (v.parameter) {
       case SweepParameter::excess_air:
@@ -187,11 +188,13 @@ std::vector<emissions::Caution> sweep_cautions(const CaseDefinition& definition,
       case SweepParameter::air_preheat:
       case SweepParameter::humidity:
       case SweepParameter::o2_enrichment:
-      case SweepParameter::blend_fraction: return true;
+      case SweepParameter::blend_fraction:
+        return true;
       case SweepParameter::firing_temperature:
       case SweepParameter::heat_loss:
       case SweepParameter::pressure:
-      case SweepParameter::reference_o2: return false;
+      case SweepParameter::reference_o2:
+        return false;
     }
     return false;
   };

@@ -40,9 +40,10 @@ void add_compare_command(CLI::App& app, const GlobalOptions& global) {
     const core::SpeciesDatabase database = species_database(global.species_file);
     const Comparison comparison = compare(cli->case_files, database);
     const Provenance provenance = make_provenance(comparison.runs.front().definition, std::chrono::system_clock::now());
-    write_output(cli->output, cli->format == "json"
-                                  ? render::json_text(render::comparison_json(comparison, provenance))
-                                  : render::render_report(cases::comparison_document(comparison, provenance), cli->format));
+    write_output(cli->output,
+                 cli->format == "json"
+                     ? render::json_text(render::comparison_json(comparison, provenance))
+                     : render::render_report(cases::comparison_document(comparison, provenance), cli->format));
   });
 }
 

@@ -1,11 +1,10 @@
 // The `stackbound` command-line program.
 
+#include <CLI/CLI.hpp>
 #include <exception>
 #include <iostream>
 #include <string>
 #include <vector>
-
-#include <CLI/CLI.hpp>
 
 #include "stackbound/cli/commands.hpp"
 #include "stackbound/core/equilibrium.hpp"

@@ -54,10 +54,14 @@ std::string model_part(const LimitOutcomes& o, std::string_view pollutant, bool&
 
 std::string_view screening_source_name(ScreeningSource source) {
   switch (source) {
-    case ScreeningSource::measured: return "measured";
-    case ScreeningSource::estimate: return "estimate";
-    case ScreeningSource::ceiling: return "ceiling";
-    case ScreeningSource::bound: return "bound";
+    case ScreeningSource::measured:
+      return "measured";
+    case ScreeningSource::estimate:
+      return "estimate";
+    case ScreeningSource::ceiling:
+      return "ceiling";
+    case ScreeningSource::bound:
+      return "bound";
   }
   return "value";
 }

@@ -38,8 +38,11 @@ nlohmann::json comparison_json(const Comparison& c, const Provenance& provenance
   nlohmann::json units = nlohmann::json::object();
   for (const MetricColumn& column : c.columns) units[column.key] = column.header;
   return {{"provenance", {{"version", provenance.version}, {"run_at", provenance.run_at}, {"case_sha256", digests}}},
-          {"bound_statement", kBoundStatement}, {"cases", cases},      {"columns", units},
-          {"flags", c.flags},                    {"cautions", c.cautions}};
+          {"bound_statement", kBoundStatement},
+          {"cases", cases},
+          {"columns", units},
+          {"flags", c.flags},
+          {"cautions", c.cautions}};
 }
 
 }  // namespace stackbound::render

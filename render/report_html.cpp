@@ -9,7 +9,8 @@ namespace stackbound::render {
 
 namespace {
 
-constexpr const char* kStyle = R"(body{font-family:system-ui,-apple-system,"Segoe UI",sans-serif;max-width:60rem;margin:1.5rem auto;padding:0 1rem;color:#1b1b1b;line-height:1.4}
+constexpr const char* kStyle =
+    R"(body{font-family:system-ui,-apple-system,"Segoe UI",sans-serif;max-width:60rem;margin:1.5rem auto;padding:0 1rem;color:#1b1b1b;line-height:1.4}
 h1{font-size:1.5rem;margin-bottom:.2rem}h2{font-size:1.1rem;margin-top:1.6rem;border-bottom:1px solid #999}
 .subtitle{color:#333;margin-top:0}
 table{border-collapse:collapse;margin:.5rem 0;font-size:.9rem}
@@ -24,8 +25,8 @@ svg{max-width:100%;height:auto;margin:.5rem 0}
 @media print{body{margin:0;max-width:none}h2{break-after:avoid}table,svg{break-inside:avoid}}
 )";
 
-std::string table_html(const ReportTable& table, const char* heading) {
-  std::string html = fmt::format("<{}>{}</{}>\n<table>\n<thead><tr>", heading, escape_html(table.title), heading);
+std::string table_html(const ReportTable& table) {
+  std::string html = "<h2>" + escape_html(table.title) + "</h2>\n<table>\n<thead><tr>";
   for (const std::string& column : table.columns) html += "<th>" + escape_html(column) + "</th>";
   html += "</tr></thead>\n<tbody>\n";
   for (const auto& row : table.rows) {
@@ -41,8 +42,9 @@ std::string table_html(const ReportTable& table, const char* heading) {
 // The headline table and its bar charts, before everything else.
 std::string headline_html(const Report& report) {
   if (report.headline.rows.empty()) return {};
-  std::string html = "<section class=\"headline\">\n" + table_html(report.headline, "h2");
-  for (const ReportBarChart& chart : report.headline_charts) html += "<figure>" + render_svg_bar_chart(chart) + "</figure>\n";
+  std::string html = "<section class=\"headline\">\n" + table_html(report.headline);
+  for (const ReportBarChart& chart : report.headline_charts)
+    html += "<figure>" + render_svg_bar_chart(chart) + "</figure>\n";
   return html + "</section>\n";
 }
 
@@ -71,7 +73,7 @@ std::string render_html(const Report& report) {
     for (const std::string& flag : report.flags) html += "<li>" + escape_html(flag) + "</li>\n";
     html += "</ul></section>\n";
   }
-  for (const ReportTable& table : report.tables) html += table_html(table, "h2");
+  for (const ReportTable& table : report.tables) html += table_html(table);
   if (!report.plots.empty()) {
     html += "<h2>Plots</h2>\n";
     for (const ReportPlot& plot : report.plots) html += "<figure>" + render_svg_plot(plot) + "</figure>\n";

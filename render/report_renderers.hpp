@@ -8,8 +8,8 @@
 namespace stackbound::render {
 
 using cases::PlotSeries;
-using cases::ReportBarChart;
 using cases::Report;
+using cases::ReportBarChart;
 using cases::ReportPlot;
 using cases::ReportTable;
 

@@ -53,7 +53,8 @@ void append_table(std::string& out, const ReportTable& table) {
   std::vector<std::size_t> widths(table.columns.size(), 0);
   for (std::size_t c = 0; c < table.columns.size(); ++c) widths[c] = display_width(table.columns[c]);
   for (const auto& row : table.rows) {
-    for (std::size_t c = 0; c < row.size() && c < widths.size(); ++c) widths[c] = std::max(widths[c], display_width(row[c]));
+    for (std::size_t c = 0; c < row.size() && c < widths.size(); ++c)
+      widths[c] = std::max(widths[c], display_width(row[c]));
   }
   std::string header = " ";
   for (std::size_t c = 0; c < table.columns.size(); ++c) header += " " + pad(table.columns[c], widths[c], c > 0);

@@ -207,8 +207,11 @@ nlohmann::json run_json(const RunResult& r, const Provenance& provenance) {
   for (const auto& [name, x] : r.resolved.combustion.flue.mole_fractions(core::GasBasis::dry)) flue_dry[name] = x;
   const core::FuelFeed& feed = r.resolved.rates.feed;
   return {
-      {"case", {{"title", r.definition.title}, {"description", r.definition.description}, {"file", r.definition.origin},
-                {"plant_type", r.definition.plant_type}}},
+      {"case",
+       {{"title", r.definition.title},
+        {"description", r.definition.description},
+        {"file", r.definition.origin},
+        {"plant_type", r.definition.plant_type}}},
       {"provenance", provenance_json(provenance)},
       {"bound_statement", kBoundStatement},
       {"fuel",
@@ -253,7 +256,8 @@ nlohmann::json run_json(const RunResult& r, const Provenance& provenance) {
         {"dry_flow_Nm3_per_h", normal_m3_per_h(r.stack.dry_mol_per_s, *r.emissions.normal)},
         {"actual_flow_m3_per_h", r.stack.actual_m3_per_s * kSecondsPerHour}}},
       {"reference_o2_percent", r.emissions.reference_o2_dry * 100.0},
-      {"reference_o2", {{"text", r.emissions.reference_o2_text}, {"from_preset", r.emissions.reference_o2_from_preset}}},
+      {"reference_o2",
+       {{"text", r.emissions.reference_o2_text}, {"from_preset", r.emissions.reference_o2_from_preset}}},
       {"o2_basis_percent", em::o2_basis_percent(r.definition.report.o2_basis)},
       {"normal_conditions", {{"key", r.emissions.normal->key}, {"description", r.emissions.normal->description}}},
       {"post_flame", post_flame_json(r)},

@@ -1,9 +1,9 @@
 #include "stackbound/render/svg_bar_chart.hpp"
 
+#include <fmt/format.h>
+
 #include <algorithm>
 #include <cmath>
-
-#include <fmt/format.h>
 
 #include "stackbound/render/svg_plot.hpp"
 
@@ -11,11 +11,11 @@ namespace stackbound::render {
 
 namespace {
 
-constexpr int kLabelWidth = 90;   // bar labels, left of the axis
+constexpr int kLabelWidth = 90;  // bar labels, left of the axis
 constexpr int kRowHeight = 22;
-constexpr int kTop = 26;          // the title
-constexpr int kBottom = 40;       // the tick labels and the limit's label
-constexpr int kRight = 70;        // the value printed after the longest bar
+constexpr int kTop = 26;     // the title
+constexpr int kBottom = 40;  // the tick labels and the limit's label
+constexpr int kRight = 70;   // the value printed after the longest bar
 
 bool drawable(double value) { return std::isfinite(value) && value > 0.0; }
 
@@ -42,7 +42,8 @@ std::string render_svg_bar_chart(const cases::ReportBarChart& chart, int width_p
   const int height = kTop + rows * kRowHeight + kBottom;
   std::string svg = fmt::format(
       "<svg xmlns=\"http://www.w3.org/2000/svg\" width=\"{}\" height=\"{}\" viewBox=\"0 0 {} {}\" role=\"img\" "
-      "font-family=\"sans-serif\" font-size=\"11\">\n<title>{}</title>\n<text x=\"4\" y=\"15\" font-weight=\"600\">{}</text>\n",
+      "font-family=\"sans-serif\" font-size=\"11\">\n<title>{}</title>\n<text x=\"4\" y=\"15\" "
+      "font-weight=\"600\">{}</text>\n",
       width_px, height, width_px, height, escape_html(chart.title), escape_html(chart.title));
   const int axis_y = kTop + rows * kRowHeight;
   for (int d = first_decade; d <= last_decade; ++d) {

@@ -56,7 +56,8 @@ Report SweepHtmlCollector::document(const CaseDefinition& definition, const Prov
   report.plots.push_back(plot("Flue-gas O2", "O2 [% dry]", "flue_o2_dry_percent"));
   report.tables.push_back(points_table());
   if (failed_ > 0) report.flags.push_back(fmt::format("{} points failed; their rows say why.", failed_));
-  for (const emissions::Caution c : sweep_cautions(definition, vary_)) report.cautions.emplace_back(emissions::caution(c).text);
+  for (const emissions::Caution c : sweep_cautions(definition, vary_))
+    report.cautions.emplace_back(emissions::caution(c).text);
   return report;
 }
 

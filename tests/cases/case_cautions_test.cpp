@@ -1,11 +1,11 @@
 // The cautions a run, a sweep and a comparison carry: each where it applies, once.
 
+#include <gtest/gtest.h>
+
 #include <algorithm>
 #include <set>
 #include <string>
 #include <vector>
-
-#include <gtest/gtest.h>
 
 #include "stackbound/cases/case_file.hpp"
 #include "stackbound/cases/comparison.hpp"

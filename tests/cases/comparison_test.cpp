@@ -4,10 +4,10 @@
 
 #include "stackbound/cases/comparison.hpp"
 
+#include <gtest/gtest.h>
+
 #include <cmath>
 #include <string>
-
-#include <gtest/gtest.h>
 
 #include "stackbound/cases/species_file.hpp"
 

@@ -3,10 +3,10 @@
 
 #include "stackbound/cases/provenance.hpp"
 
+#include <gtest/gtest.h>
+
 #include <chrono>
 #include <string>
-
-#include <gtest/gtest.h>
 
 #include "stackbound/cases/case_file.hpp"
 #include "stackbound/cases/input_file.hpp"
@@ -50,8 +50,8 @@ TEST(Provenance, FingerprintIsOfTheCaseFileBytes) {
   EXPECT_EQ(p.case_sha256.size(), 64U);
   EXPECT_EQ(p.version, kVersion);
   EXPECT_EQ(p.run_at, "2023-11-14T22:13:20Z");
-  EXPECT_EQ(provenance_line(p), "stackbound " + std::string(kVersion) + ", run at 2023-11-14T22:13:20Z, case file SHA-256 " +
-                                    p.case_sha256);
+  EXPECT_EQ(provenance_line(p), "stackbound " + std::string(kVersion) +
+                                    ", run at 2023-11-14T22:13:20Z, case file SHA-256 " + p.case_sha256);
   // One byte more (a trailing blank line) is another file.
   EXPECT_NE(parse_case(bytes + "\n", "gas_boiler.yaml").source_sha256, p.case_sha256);
 }

@@ -1,19 +1,17 @@
 // The screening rows of the stated limits: every source (measured, estimate, ceiling, bound) on the
 // limit's basis, with the words each outcome gives, on the example cases and variants of them.
 
-#include "stackbound/cases/pipeline.hpp"
-
-#include <string>
-#include <vector>
-
 #include <gtest/gtest.h>
 
 #include <nlohmann/json.hpp>
+#include <string>
+#include <vector>
 
 #include "stackbound/cases/case_file.hpp"
+#include "stackbound/cases/input_file.hpp"
+#include "stackbound/cases/pipeline.hpp"
 #include "stackbound/cases/run_document.hpp"
 #include "stackbound/cases/species_file.hpp"
-#include "stackbound/cases/input_file.hpp"
 #include "tests/support/run_binary.hpp"
 #include "tests/support/tolerance.hpp"
 
@@ -103,8 +101,9 @@ TEST(ScreeningRows, WoodBoilerMeasuredCoGovernsOverTheModel) {
 // Wrong if a NOx ceiling below the limit were not read as "not reachable", or the gas turbine's
 // estimate-below, ceiling-above case were read as anything but "cannot be ruled out".
 TEST(ScreeningRows, CeilingBelowAndCeilingAboveTheLimit) {
-  const std::string text = replaced(example_text("gas_boiler.yaml"), "limit: 100 mg/Nm3, dry, O2=3%\n    - pollutant: CO",
-                                    "limit: 5000 mg/Nm3, dry, O2=3%\n    - pollutant: CO");
+  const std::string text =
+      replaced(example_text("gas_boiler.yaml"), "limit: 100 mg/Nm3, dry, O2=3%\n    - pollutant: CO",
+               "limit: 5000 mg/Nm3, dry, O2=3%\n    - pollutant: CO");
   const RunResult high = run_case(parse_case(text, "gas_boiler.yaml"), builtin_species());
   const std::vector<LimitScreening> nox = rows_of(high, 0);
   ASSERT_EQ(nox.size(), 4U);
@@ -192,7 +191,8 @@ TEST(ScreeningRows, HeadlineHoldsEachPollutantOnThePermitsBasis) {
   EXPECT_FALSE(headline[2].limit);
   EXPECT_FALSE(headline[2].measured);  // the gas boiler states no measured NO
   EXPECT_EQ(headline[2].reading, "");
-  EXPECT_TRUE(is_close(headline[2].bound, run.emissions.pollutants[1].emission.mg_per_Nm3_at_reference.result.value(), 0.0));
+  EXPECT_TRUE(
+      is_close(headline[2].bound, run.emissions.pollutants[1].emission.mg_per_Nm3_at_reference.result.value(), 0.0));
 }
 
 // Wrong if the text or HTML report did not open with the headline, before the summary and details.

@@ -3,9 +3,8 @@
 
 #include <gtest/gtest.h>
 
-#include <string>
-
 #include <nlohmann/json.hpp>
+#include <string>
 
 #include "stackbound/cases/case_file.hpp"
 #include "stackbound/version.hpp"
@@ -48,8 +47,8 @@ TEST(CommandLine, EveryOutputCarriesItsProvenance) {
   ASSERT_EQ(sweep.exit_code, 0) << sweep.err;
   EXPECT_NE(sweep.out.find("\n# provenance: " + version + ", run at "), std::string::npos);
   EXPECT_NE(sweep.out.find(sha), std::string::npos);
-  const auto sweep_html = run_stackbound(
-      {"sweep", example("gas_boiler.yaml"), "--vary", "excess_air=10%:20%:2", "--format", "html"});
+  const auto sweep_html =
+      run_stackbound({"sweep", example("gas_boiler.yaml"), "--vary", "excess_air=10%:20%:2", "--format", "html"});
   ASSERT_EQ(sweep_html.exit_code, 0) << sweep_html.err;
   EXPECT_NE(sweep_html.out.find(sha), std::string::npos);
 

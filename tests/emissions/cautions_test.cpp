@@ -39,10 +39,11 @@ TEST(Cautions, StandardSetCarriesTheRequiredStatements) {
 // equilibrium, CO only for a well-mixed flame, rates are no potential-to-emit figure, a sweep at a
 // stated firing temperature ignores the temperature change.
 TEST(Cautions, TheCautionsThatSayWhatMatters) {
-  EXPECT_EQ(caution(Caution::fuel_nitrogen_unbounded).text,
-            "NO from the nitrogen bound in the fuel is not bounded by equilibrium: it forms by kinetics in the flame and "
-            "can exceed the equilibrium NO at the firing temperature. Only the ceiling (all fuel nitrogen as NO) bounds "
-            "it; state fuel.nitrogen_conversion from the plant's data where it is known.");
+  EXPECT_EQ(
+      caution(Caution::fuel_nitrogen_unbounded).text,
+      "NO from the nitrogen bound in the fuel is not bounded by equilibrium: it forms by kinetics in the flame and "
+      "can exceed the equilibrium NO at the firing temperature. Only the ceiling (all fuel nitrogen as NO) bounds "
+      "it; state fuel.nitrogen_conversion from the plant's data where it is known.");
   EXPECT_EQ(caution(Caution::co_well_mixed_only).text,
             "CO is bounded by these figures only in a well-mixed flame with enough time at temperature: poor mixing, "
             "quenching on cold surfaces, or too short a residence time leave CO far above every figure here, the "

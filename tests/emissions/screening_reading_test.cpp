@@ -1,8 +1,8 @@
 #include "stackbound/emissions/screening_reading.hpp"
 
-#include <string>
-
 #include <gtest/gtest.h>
+
+#include <string>
 
 namespace stackbound::emissions {
 namespace {

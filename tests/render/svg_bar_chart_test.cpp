@@ -3,11 +3,11 @@
 
 #include "stackbound/render/svg_bar_chart.hpp"
 
+#include <gtest/gtest.h>
+
 #include <cmath>
 #include <limits>
 #include <string>
-
-#include <gtest/gtest.h>
 
 namespace stackbound::render {
 namespace {
@@ -20,8 +20,8 @@ std::size_t count_of(const std::string& text, const std::string& what) {
 
 // Wrong if a figure lost its bar, the limit its line, or the axis did not span the figures' decades.
 TEST(SvgBarChart, OneBarPerFigureAndTheLimitAsALine) {
-  const ReportBarChart chart{"NOx [mg/Nm3, dry, O2=3%]", {{"estimate", 0.8}, {"ceiling", 2774.0}, {"measured", 127.0}},
-                             100.0};
+  const ReportBarChart chart{
+      "NOx [mg/Nm3, dry, O2=3%]", {{"estimate", 0.8}, {"ceiling", 2774.0}, {"measured", 127.0}}, 100.0};
   const std::string svg = render_svg_bar_chart(chart);
   EXPECT_EQ(svg.rfind("<svg", 0), 0U);
   EXPECT_EQ(svg.substr(svg.size() - 6), "</svg>");
