@@ -155,6 +155,7 @@ struct ReportSpec {
 
 struct CaseDefinition {
   std::string origin;                          // file name, for messages
+  std::string source_sha256;                   // SHA-256 of the case file's bytes (cases/sha256.hpp)
   std::string title;
   std::string description;
   std::string plant_type;                      // key of a reference-O2 preset, or empty

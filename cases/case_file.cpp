@@ -1,14 +1,15 @@
 #include "stackbound/cases/case_file.hpp"
 
+#include <fmt/format.h>
+
 #include <algorithm>
 #include <array>
 #include <cmath>
 
-#include <fmt/format.h>
-
 #include "stackbound/cases/fuel_spec.hpp"
 #include "stackbound/cases/input_file.hpp"
 #include "stackbound/cases/plausible_ranges.hpp"
+#include "stackbound/cases/sha256.hpp"
 #include "stackbound/cases/yaml_reader.hpp"
 #include "stackbound/emissions/basis.hpp"
 #include "stackbound/units/input_error.hpp"
@@ -326,6 +327,7 @@ void read_case(const YamlField& root, const std::string& origin, LoadedCase& loa
   root.allow_only({"case", "fuel", "air", "operating_point", "firing", "post_flame", "stack", "report"});
   CaseDefinition& definition = loaded.definition;
   definition.origin = origin;
+  definition.source_sha256 = sha256_hex(text);
   const YamlField info = root.required("case");
   info.allow_only({"title", "description", "plant_type"});
   definition.title = info.required("title").text();

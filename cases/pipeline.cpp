@@ -41,8 +41,9 @@ RunResult run_case(CaseDefinition definition, const core::SpeciesDatabase& datab
                                          .describe_reference_o2 = options.full_report};
   EmissionFigures figures =
       run.emissions ? emissions_stage(definition, resolved, fired, stack, emission_options, &post_flame) : previous->emissions;
-  Screening screening =
-      run.screening ? screening_stage({definition, resolved, fired, stack, figures}, database) : Screening{};
+  Screening screening = run.screening
+                            ? screening_stage({definition, resolved, fired, stack, figures, post_flame}, database)
+                            : Screening{};
   return {std::move(definition),
           std::move(resolved),
           std::move(fired),

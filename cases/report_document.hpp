@@ -3,6 +3,7 @@
 // render/ print it as aligned text, CSV or one self-contained HTML file. JSON is built from the
 // structured results instead, with its own stable keys (render/run_json.hpp).
 
+#include <optional>
 #include <string>
 #include <utility>
 #include <vector>
@@ -34,9 +35,19 @@ struct ReportPlot {
   bool log_y = false;
 };
 
+// A bar chart of one pollutant's headline figures (drawn in HTML only): one bar per figure on a
+// logarithmic axis, the stated limit as a line across them.
+struct ReportBarChart {
+  std::string title;                                 // with the unit and basis of the bars
+  std::vector<std::pair<std::string, double>> bars;  // label -> value; values <= 0 are not drawn
+  std::optional<double> limit;
+};
+
 struct Report {
   std::string title;
   std::string subtitle;                                     // e.g. what kind of result this is
+  ReportTable headline;                                     // printed first, when it has rows
+  std::vector<ReportBarChart> headline_charts;              // drawn beside the headline in HTML
   std::vector<std::pair<std::string, std::string>> summary;  // label -> value with unit
   std::vector<ReportTable> tables;
   std::vector<ReportPlot> plots;                            // drawn in HTML only

@@ -200,13 +200,22 @@ ReportTable post_flame_table(const RunResult& r) {
 ReportTable limits_table(const Screening& s) {
   ReportTable limits;
   limits.title = "Screening against the stated limits";
-  limits.columns = {"pollutant", "stated limit", "bound on the limit's basis", "share of limit", "outcome"};
+  limits.columns = {"pollutant", "stated limit", "source", "value on the limit's basis", "share of limit", "reading"};
   for (const LimitScreening& l : s.limits) {
-    limits.rows.push_back({l.pollutant, l.limit_text, fmt::format("{} {}", num(l.result.value), l.result.unit),
-                           fmt::format("{:.1f} %", l.result.fraction_of_limit * 100.0),
-                           std::string(em::screening_outcome_name(l.result.outcome))});
+    limits.rows.push_back({l.pollutant, l.limit_text, std::string(em::screening_source_name(l.source)),
+                           fmt::format("{} {}", num(l.result.value), l.result.unit),
+                           fmt::format("{:.1f} %", l.result.fraction_of_limit * 100.0), l.reading});
   }
-  for (const LimitScreening& l : s.limits) limits.notes.push_back(l.result.wording);
+  for (std::size_t i = 0; i < s.limits.size(); ++i) {
+    if (i == 0 || s.limits[i].limit_index != s.limits[i - 1].limit_index) {
+      limits.notes.push_back(
+          fmt::format("{} ({}): {}.", s.limits[i].pollutant, s.limits[i].limit_text, s.limits[i].conclusion));
+    }
+  }
+  limits.notes.push_back(
+      "Each value is converted to the limit's basis: measured values with the measured O2 (rates by Method 19 with "
+      "the fuel's Fd), the estimate, ceiling and bound with the model's stack gas. A screening comparison, not a "
+      "compliance determination.");
   return limits;
 }
 
@@ -269,16 +278,57 @@ ReportTable species_table(const FiringState& fired) {
   return species;
 }
 
+std::string optional_cell(const std::optional<double>& value) { return value ? num(*value) : "-"; }
+
+// The figures an engineer reads first, per pollutant on the permit's basis.
+ReportTable headline_table(const Screening& s) {
+  ReportTable table;
+  table.title = "Headline: each pollutant on the permit's basis";
+  table.columns = {"pollutant", "unit and basis", "estimate", "ceiling", "bound", "measured", "stated limit"};
+  for (const HeadlineRow& h : s.headline) {
+    table.rows.push_back({h.pollutant, h.basis.empty() ? h.unit : fmt::format("{} ({})", h.unit, h.basis),
+                          optional_cell(h.estimate), optional_cell(h.ceiling), num(h.bound), optional_cell(h.measured),
+                          optional_cell(h.limit)});
+    if (!h.reading.empty()) table.notes.push_back(fmt::format("{}: {}.", h.pollutant, h.reading));
+  }
+  table.notes.push_back(
+      "Estimate: post-flame kinetics (not conservative); ceiling: the most the modelled path gives; bound: "
+      "equilibrium at the stated firing conditions; measured: as stated in the case file, on the same "
+      "basis. Without a stated limit the basis is mg/Nm3 dry at the reference O2. Details and cautions "
+      "follow.");
+  return table;
+}
+
+std::vector<ReportBarChart> headline_charts(const Screening& s) {
+  std::vector<ReportBarChart> charts;
+  for (const HeadlineRow& h : s.headline) {
+    ReportBarChart chart{h.basis.empty() ? fmt::format("{} [{}]", h.pollutant, h.unit)
+                                         : fmt::format("{} [{}, {}]", h.pollutant, h.unit, h.basis),
+                         {},
+                         h.limit};
+    if (h.estimate) chart.bars.emplace_back("estimate", *h.estimate);
+    if (h.ceiling) chart.bars.emplace_back("ceiling", *h.ceiling);
+    chart.bars.emplace_back("bound", h.bound);
+    if (h.measured) chart.bars.emplace_back("measured", *h.measured);
+    charts.push_back(std::move(chart));
+  }
+  return charts;
+}
+
 }  // namespace
 
-Report run_document(const RunResult& r) {
+Report run_document(const RunResult& r, const Provenance& provenance) {
   Report report;
   report.title = r.definition.title;
   report.subtitle = fmt::format(
       "CO and NO figures are the {}: a screening estimate from chemical equilibrium, not a measurement and not a "
       "compliance determination.{}",
       kBoundStatement, r.definition.description.empty() ? "" : " " + r.definition.description);
+  report.headline = headline_table(r.screening);
+  report.headline_charts = headline_charts(r.screening);
   report.summary = summary(r);
+  const std::vector<std::pair<std::string, std::string>> stamp = provenance_summary(provenance);
+  report.summary.insert(report.summary.begin() + 1, stamp.begin(), stamp.end());
   report.tables.push_back(bounds_table(r));
   report.tables.push_back(post_flame_table(r));
   if (!r.screening.limits.empty()) report.tables.push_back(limits_table(r.screening));

@@ -3,6 +3,7 @@
 // render/).
 
 #include "stackbound/cases/pipeline.hpp"
+#include "stackbound/cases/provenance.hpp"
 #include "stackbound/cases/report_document.hpp"
 
 namespace stackbound::cases {
@@ -10,6 +11,7 @@ namespace stackbound::cases {
 // The wording every output of a run carries for the CO and NO figures.
 inline constexpr const char* kBoundStatement = "equilibrium bound at the stated firing conditions";
 
-Report run_document(const RunResult& result);
+// `provenance` goes into the summary (tool version, run time, case file SHA-256).
+Report run_document(const RunResult& result, const Provenance& provenance);
 
 }  // namespace stackbound::cases

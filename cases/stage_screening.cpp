@@ -3,6 +3,7 @@
 #include <fmt/format.h>
 
 #include <algorithm>
+#include <cctype>
 #include <cmath>
 
 #include "stackbound/cases/source_map.hpp"
@@ -18,50 +19,142 @@ namespace em = stackbound::emissions;
 
 std::string percent(double fraction) { return fmt::format("{:.2f} %", fraction * 100.0); }
 
-em::ScreeningResult screen_limit(const LimitSpec& limit, const PollutantBound& bound, const StackGas& stack) {
-  if (const auto* concentration = std::get_if<em::Concentration>(&limit.limit)) {
-    return em::screen_concentration(bound.emission.ppmvd, *concentration, stack.context);
-  }
-  const em::RateLimit& rate = std::get<em::RateLimit>(limit.limit);
-  switch (rate.kind) {
-    case em::RateKind::mass_flow:
-      return em::screen_mass_rate(bound.emission.mass_rate, rate);
-    case em::RateKind::per_heat_input:
-      return em::screen_heat_input_rate(bound.emission.method19, rate);
-    case em::RateKind::per_useful_output:
-      break;
-  }
+[[noreturn]] void refuse_output_limit(const LimitSpec& limit) {
   throw units::InputError(
       fmt::format("\"{}\": a limit per useful output needs an efficiency, which a case file does "
                   "not state; give the limit as a concentration, a mass rate or per heat input",
                   limit.text));
 }
 
-// A concentration limit (unit of concentration) or a rate limit (kg/h, lb/MMBtu ...).
-std::vector<LimitScreening> screen_limits(const ScreeningInput& in) {
-  std::vector<LimitScreening> screened;
-  const std::vector<LimitSpec>& limits = in.definition.report.limits;
-  for (std::size_t i = 0; i < limits.size(); ++i) {
-    const std::string field = fmt::format("report.limits[{}].limit", i);
-    const std::vector<PollutantBound>& bounds = in.figures.pollutants;
-    const auto bound =
-        std::find_if(bounds.begin(), bounds.end(), [&](const auto& p) { return p.name == limits[i].pollutant; });
-    if (bound == bounds.end()) {
-      std::vector<std::string> names;
-      for (const PollutantBound& p : bounds) names.push_back(p.name);
-      throw units::InputError(fmt::format("{}: report.limits: pollutant \"{}\" is not among report.pollutants ({})",
-                                          field, limits[i].pollutant, fmt::join(names, ", ")));
+// A modelled figure (the bound, the estimate or the ceiling) against a concentration limit or a rate
+// limit (kg/h, lb/MMBtu ...).
+em::ScreeningResult screen_figure(const LimitSpec& limit, const em::StackEmission& emission, const StackGas& stack) {
+  if (const auto* concentration = std::get_if<em::Concentration>(&limit.limit)) {
+    return em::screen_concentration(emission.ppmvd, *concentration, stack.context);
+  }
+  const em::RateLimit& rate = std::get<em::RateLimit>(limit.limit);
+  switch (rate.kind) {
+    case em::RateKind::mass_flow:
+      return em::screen_mass_rate(emission.mass_rate, rate);
+    case em::RateKind::per_heat_input:
+      return em::screen_heat_input_rate(emission.method19, rate);
+    case em::RateKind::per_useful_output:
+      break;
+  }
+  refuse_output_limit(limit);
+}
+
+// The stack context of measured values: the model's, with the measured O2 (dry) when one is stated.
+em::ConcentrationContext measured_context_of(const ScreeningInput& in) {
+  em::ConcentrationContext context = in.stack.context;
+  if (const std::optional<MeasuredValue>& o2 = in.definition.stack.measured.o2) {
+    const em::Basis dry_fraction =
+        em::make_basis(em::mole_unit("%"), em::Moisture::dry, em::DiluentReference::as_measured());
+    context.o2_dry_fraction =
+        at_field("stack.measured.o2", [&] { return o2->value.to(dry_fraction, in.stack.context).value(); }) / 100.0;
+  }
+  return context;
+}
+
+// The measured value of a pollutant, or nullptr.
+const MeasuredValue* measured_of(const MeasuredSpec& measured, std::string_view pollutant) {
+  const std::optional<MeasuredValue>* value = pollutant == "CO"    ? &measured.co
+                                              : pollutant == "NO"  ? &measured.no
+                                              : pollutant == "NOx" ? &measured.nox
+                                                                   : nullptr;
+  return value != nullptr && *value ? &**value : nullptr;
+}
+
+// A measured concentration against a limit: converted with the measured O2 for a concentration limit;
+// per heat input by Method 19 (Fd of the fuel, measured O2, 20.9 % as Method 19 writes it); as a mass
+// rate, that rate times the heat input.
+em::ScreeningResult screen_measured(const LimitSpec& limit, const MeasuredValue& measured, const ScreeningInput& in,
+                                    const em::ConcentrationContext& context) {
+  if (const auto* concentration = std::get_if<em::Concentration>(&limit.limit)) {
+    return em::screen_concentration(measured.value, *concentration, context);
+  }
+  const em::RateLimit& rate = std::get<em::RateLimit>(limit.limit);
+  if (rate.kind == em::RateKind::per_useful_output) refuse_output_limit(limit);
+  em::ConcentrationContext method19_context = context;
+  method19_context.o2_basis = em::O2Basis::us_epa_20_9;
+  const em::FFactor fd =
+      em::FFactor::from_scm_per_J(em::FFactorKind::dry, in.resolved.combustion.f_factors.fd_m3_per_J);
+  const em::HeatInputRate per_heat = em::method19_o2_dry(measured.value, fd, method19_context);
+  if (rate.kind == em::RateKind::per_heat_input) return em::screen_heat_input_rate(per_heat, rate);
+  return em::screen_mass_rate(units::kilograms_per_second(per_heat.kg_per_J * in.resolved.rates.feed.heat_input_hhv_W),
+                              rate);
+}
+
+const PollutantBound& bound_for(const LimitSpec& limit, const std::vector<PollutantBound>& bounds,
+                                const std::string& field) {
+  const auto bound =
+      std::find_if(bounds.begin(), bounds.end(), [&](const auto& p) { return p.name == limit.pollutant; });
+  if (bound == bounds.end()) {
+    std::vector<std::string> names;
+    for (const PollutantBound& p : bounds) names.push_back(p.name);
+    throw units::InputError(fmt::format("{}: report.limits: pollutant \"{}\" is not among report.pollutants ({})",
+                                        field, limit.pollutant, fmt::join(names, ", ")));
+  }
+  return *bound;
+}
+
+// The rows of one limit: measured (when stated), estimate and ceiling (when the post-flame stage gives
+// them), bound; each with its reading, all with the limit's conclusion.
+std::vector<LimitScreening> screen_one_limit(const ScreeningInput& in, std::size_t index,
+                                             const em::ConcentrationContext& measured_context) {
+  const LimitSpec& limit = in.definition.report.limits[index];
+  const std::string field = fmt::format("report.limits[{}].limit", index);
+  const PollutantBound& bound = bound_for(limit, in.figures.pollutants, field);
+  std::vector<std::pair<em::ScreeningSource, em::ScreeningResult>> results;
+  at_field(field, [&] {
+    if (const MeasuredValue* measured = measured_of(in.definition.stack.measured, limit.pollutant)) {
+      results.emplace_back(em::ScreeningSource::measured, screen_measured(limit, *measured, in, measured_context));
     }
-    em::ScreeningResult result = at_field(field, [&] { return screen_limit(limits[i], *bound, in.stack); });
-    screened.push_back({limits[i].pollutant, limits[i].text, std::move(result)});
+    if (bound.estimate) {
+      results.emplace_back(em::ScreeningSource::estimate, screen_figure(limit, bound.estimate->emission, in.stack));
+    }
+    if (bound.ceiling) {
+      results.emplace_back(em::ScreeningSource::ceiling, screen_figure(limit, bound.ceiling->emission, in.stack));
+    }
+    results.emplace_back(em::ScreeningSource::bound, screen_figure(limit, bound.emission, in.stack));
+  });
+  em::LimitOutcomes outcomes;
+  for (const auto& [source, result] : results) {
+    switch (source) {
+      case em::ScreeningSource::measured:
+        outcomes.measured = result.outcome;
+        break;
+      case em::ScreeningSource::estimate:
+        outcomes.estimate = result.outcome;
+        break;
+      case em::ScreeningSource::ceiling:
+        outcomes.ceiling = result.outcome;
+        break;
+      case em::ScreeningSource::bound:
+        outcomes.bound = result.outcome;
+        break;
+    }
+  }
+  const std::string conclusion = em::screening_conclusion(outcomes, limit.pollutant);
+  std::vector<LimitScreening> rows;
+  for (auto& [source, result] : results) {
+    std::string reading = em::screening_reading(source, result.outcome, limit.pollutant);
+    rows.push_back({limit.pollutant, limit.text, index, source, std::move(result), std::move(reading), conclusion});
+  }
+  return rows;
+}
+
+std::vector<LimitScreening> screen_limits(const ScreeningInput& in, const em::ConcentrationContext& measured_context) {
+  std::vector<LimitScreening> screened;
+  for (std::size_t i = 0; i < in.definition.report.limits.size(); ++i) {
+    for (LimitScreening& row : screen_one_limit(in, i, measured_context)) screened.push_back(std::move(row));
   }
   return screened;
 }
 
-MeasuredComparison measured_o2(const MeasuredValue& o2, const StackGas& stack) {
-  const em::Basis dry_percent =
-      em::make_basis(em::mole_unit("%"), em::Moisture::dry, em::DiluentReference::as_measured());
-  const double value = at_field("stack.measured.o2", [&] { return o2.value.to(dry_percent, stack.context).value(); });
+// `measured_o2_dry`: the measured O2 as a dry fraction (measured_context_of).
+MeasuredComparison measured_o2(const MeasuredValue& o2, double measured_o2_dry, const StackGas& stack) {
+  const double value = measured_o2_dry * 100.0;
   MeasuredComparison row{"O2", o2.text, "%, dry", value, stack.o2_dry * 100.0, "%", ""};
   if (std::abs(row.measured - row.model) > kO2MismatchPoints) {
     row.finding = fmt::format(
@@ -70,6 +163,67 @@ MeasuredComparison measured_o2(const MeasuredValue& o2, const StackGas& stack) {
         row.measured, row.model, kO2MismatchPoints);
   }
   return row;
+}
+
+// A pollutant without a stated limit on mg/Nm3 dry at the reference O2 (the basis of the bound's
+// mg/Nm3 figure).
+HeadlineRow unlimited_headline(const PollutantBound& p, const ScreeningInput& in,
+                               const em::ConcentrationContext& measured_context) {
+  const em::Concentration& reference = p.emission.mg_per_Nm3_at_reference.result;
+  const std::string basis = reference.basis().text();
+  const auto value = [](const std::optional<PollutantFigure>& f) -> std::optional<double> {
+    if (!f) return std::nullopt;
+    return f->emission.mg_per_Nm3_at_reference.result.value();
+  };
+  HeadlineRow row{p.name,
+                  reference.basis().unit.symbol,
+                  basis.substr(reference.basis().unit.symbol.size() + 2),
+                  value(p.estimate),
+                  value(p.ceiling),
+                  reference.value(),
+                  std::nullopt,
+                  std::nullopt,
+                  ""};
+  if (const MeasuredValue* measured = measured_of(in.definition.stack.measured, p.name)) {
+    std::string field = "stack.measured.";
+    for (const char c : p.name) field += static_cast<char>(std::tolower(static_cast<unsigned char>(c)));
+    row.measured = at_field(field, [&] { return measured->value.to(reference.basis(), measured_context).value(); });
+  }
+  return row;
+}
+
+// The headline: per stated limit its rows on its basis, then the pollutants without a limit.
+std::vector<HeadlineRow> headline_of(const std::vector<LimitScreening>& limits, const ScreeningInput& in,
+                                     const em::ConcentrationContext& measured_context) {
+  std::vector<HeadlineRow> headline;
+  for (std::size_t i = 0; i < limits.size(); ++i) {
+    const LimitScreening& l = limits[i];
+    if (i == 0 || l.limit_index != limits[i - 1].limit_index) {
+      headline.push_back({l.pollutant, l.result.unit, l.result.basis, std::nullopt, std::nullopt, 0.0, std::nullopt,
+                          l.result.limit, l.conclusion});
+    }
+    HeadlineRow& row = headline.back();
+    switch (l.source) {
+      case em::ScreeningSource::measured:
+        row.measured = l.result.value;
+        break;
+      case em::ScreeningSource::estimate:
+        row.estimate = l.result.value;
+        break;
+      case em::ScreeningSource::ceiling:
+        row.ceiling = l.result.value;
+        break;
+      case em::ScreeningSource::bound:
+        row.bound = l.result.value;
+        break;
+    }
+  }
+  for (const PollutantBound& p : in.figures.pollutants) {
+    const bool limited =
+        std::any_of(limits.begin(), limits.end(), [&](const LimitScreening& l) { return l.pollutant == p.name; });
+    if (!limited) headline.push_back(unlimited_headline(p, in, measured_context));
+  }
+  return headline;
 }
 
 MeasuredComparison measured_moisture(const MeasuredFraction& moisture, const StackGas& stack) {
@@ -114,14 +268,11 @@ MeasuredComparison measured_pollutant(const MeasuredValue& measured, std::string
   return row;
 }
 
-std::vector<MeasuredComparison> compare_measured(const ScreeningInput& in) {
+std::vector<MeasuredComparison> compare_measured(const ScreeningInput& in,
+                                                 const em::ConcentrationContext& measured_context) {
   const MeasuredSpec& measured = in.definition.stack.measured;
   std::vector<MeasuredComparison> rows;
-  em::ConcentrationContext measured_context = in.stack.context;
-  if (measured.o2) {
-    rows.push_back(measured_o2(*measured.o2, in.stack));
-    measured_context.o2_dry_fraction = rows.back().measured / 100.0;
-  }
+  if (measured.o2) rows.push_back(measured_o2(*measured.o2, *measured_context.o2_dry_fraction, in.stack));
   if (measured.moisture) rows.push_back(measured_moisture(*measured.moisture, in.stack));
   if (measured.co) rows.push_back(measured_pollutant(*measured.co, "stack.measured.co", in, measured_context));
   if (measured.no) rows.push_back(measured_pollutant(*measured.no, "stack.measured.no", in, measured_context));
@@ -201,11 +352,22 @@ std::vector<std::string> assumptions_of(const ScreeningInput& in, const core::Sp
   };
 }
 
-// The standard cautions, the O2-correction one, and "confirm against your permit" for a preset.
-void add_cautions(bool reference_o2_from_preset, Screening& screening) {
+// The standard cautions, then those that apply to this case, in the order all_cautions() lists them.
+void add_cautions(const ScreeningInput& in, Screening& screening) {
   std::vector<em::Caution> cautions(em::standard_cautions().begin(), em::standard_cautions().end());
   cautions.push_back(em::Caution::o2_correction_validity);
-  if (reference_o2_from_preset) cautions.push_back(em::Caution::confirm_presets);
+  if (in.figures.reference_o2_from_preset) cautions.push_back(em::Caution::confirm_presets);
+  const std::vector<em::Pollutant>& pollutants = in.definition.report.pollutants;
+  if (std::any_of(pollutants.begin(), pollutants.end(), [](const em::Pollutant& p) { return p.name == "CO"; })) {
+    cautions.push_back(em::Caution::co_well_mixed_only);
+  }
+  if (in.post_flame.fuel_nitrogen.no.fuel_nitrogen_mol_per_kg > 0.0) {
+    cautions.push_back(em::Caution::fuel_nitrogen_unbounded);
+  }
+  const em::ReferenceO2Preset* preset = in.definition.reference_o2_preset;
+  if (preset != nullptr && preset->key == "ied-gas-turbine" && !in.definition.firing.primary_zone) {
+    cautions.push_back(em::Caution::primary_zone_needed);
+  }
   for (const em::CautionText& entry : em::all_cautions()) {
     if (std::find(cautions.begin(), cautions.end(), entry.caution) != cautions.end()) {
       screening.cautions.emplace_back(entry.text);
@@ -218,15 +380,17 @@ void add_cautions(bool reference_o2_from_preset, Screening& screening) {
 
 Screening screening_stage(const ScreeningInput& in, const core::SpeciesDatabase& database) {
   Screening screening;
-  screening.limits = screen_limits(in);
-  screening.measured = compare_measured(in);
+  const em::ConcentrationContext measured_context = measured_context_of(in);
+  screening.limits = screen_limits(in, measured_context);
+  screening.measured = compare_measured(in, measured_context);
+  screening.headline = headline_of(screening.limits, in, measured_context);
   for (const MeasuredComparison& row : screening.measured) {
     if (!row.finding.empty()) screening.findings.push_back(row.finding);
   }
   for (std::string& finding : model_findings(in)) screening.findings.push_back(std::move(finding));
   screening.warnings = warnings_of(in.resolved);
   screening.assumptions = assumptions_of(in, database);
-  add_cautions(in.figures.reference_o2_from_preset, screening);
+  add_cautions(in, screening);
   return screening;
 }
 

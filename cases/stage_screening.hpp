@@ -4,23 +4,32 @@
 // (where they disagree, and what the model itself shows: soot, rich firing, a stack near the dew
 // point), and the assumptions and cautions every report carries.
 
+#include <optional>
 #include <string>
 #include <vector>
 
 #include "stackbound/cases/case_definition.hpp"
 #include "stackbound/cases/stage_emissions.hpp"
 #include "stackbound/cases/stage_fire.hpp"
+#include "stackbound/cases/stage_post_flame.hpp"
 #include "stackbound/cases/stage_resolve.hpp"
 #include "stackbound/cases/stage_stack.hpp"
 #include "stackbound/core/species_database.hpp"
 #include "stackbound/emissions/limit_screening.hpp"
+#include "stackbound/emissions/screening_reading.hpp"
 
 namespace stackbound::cases {
 
+// One row of the screening: one value (measured, estimate, ceiling or bound) against one stated limit,
+// on the limit's basis. A limit has a row per source it has a value for, in that order.
 struct LimitScreening {
   std::string pollutant;
   std::string limit_text;
+  std::size_t limit_index = 0;  // in report.limits
+  emissions::ScreeningSource source = emissions::ScreeningSource::bound;
   emissions::ScreeningResult result;
+  std::string reading;     // this row's words (emissions/screening_reading.hpp)
+  std::string conclusion;  // the limit's conclusion from all its rows (the same on each of them)
 };
 
 // A measured value set beside the equilibrium bound on the same basis.
@@ -34,7 +43,23 @@ struct MeasuredComparison {
   std::string finding;  // empty when consistent
 };
 
+// One line of the headline (the figures an engineer reads first), on the permit's basis: the stated
+// limit's, or for a pollutant without a limit mg/Nm3 dry at the reference O2. A pollutant with two
+// limits has two lines.
+struct HeadlineRow {
+  std::string pollutant;
+  std::string unit;                // "mg/Nm3", "lb/MMBtu", "kg/h"
+  std::string basis;               // the rest of the basis ("dry, O2=3%, as NO2, normal=0C"; "" for rates)
+  std::optional<double> estimate;  // none for NO2, SO2 or when the kinetics could not run
+  std::optional<double> ceiling;
+  double bound = 0.0;
+  std::optional<double> measured;  // when stack.measured states the pollutant
+  std::optional<double> limit;     // when a limit is stated
+  std::string reading;             // the limit's conclusion; "" without a limit
+};
+
 struct Screening {
+  std::vector<HeadlineRow> headline;
   std::vector<LimitScreening> limits;
   std::vector<MeasuredComparison> measured;
   std::vector<std::string> findings;  // what the reader must look at
@@ -51,6 +76,7 @@ struct ScreeningInput {
   const FiringState& fired;
   const StackGas& stack;
   const EmissionFigures& figures;
+  const PostFlame& post_flame;
 };
 
 // Runs the stage. `database`: the species data of the run, named in the assumptions. Errors name the

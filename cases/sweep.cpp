@@ -178,6 +178,32 @@ void apply_parameter(CaseDefinition& definition, SweepParameter parameter, doubl
   }
 }
 
+std::vector<emissions::Caution> sweep_cautions(const CaseDefinition& definition, const std::vector<VarySpec>& vary) {
+  std::vector<emissions::Caution> cautions(emissions::standard_cautions().begin(),
+                                           emissions::standard_cautions().end());
+  const auto moves_flame_temperature = [](const VarySpec& v) {
+    switch (v.parameter) {
+      case SweepParameter::excess_air:
+      case SweepParameter::flue_o2:
+      case SweepParameter::air_preheat:
+      case SweepParameter::humidity:
+      case SweepParameter::o2_enrichment:
+      case SweepParameter::blend_fraction:
+        return true;
+      case SweepParameter::firing_temperature:
+      case SweepParameter::heat_loss:
+      case SweepParameter::pressure:
+      case SweepParameter::reference_o2:
+        return false;
+    }
+    return false;
+  };
+  if (!definition.firing.adiabatic && std::any_of(vary.begin(), vary.end(), moves_flame_temperature)) {
+    cautions.push_back(emissions::Caution::sweep_fixed_temperature);
+  }
+  return cautions;
+}
+
 void check_sweep(const CaseDefinition& definition, const std::vector<VarySpec>& vary) {
   if (vary.empty()) throw units::InputError("--vary: give at least one, e.g. --vary excess_air=5%:45%:9");
   for (std::size_t i = 0; i < vary.size(); ++i) {

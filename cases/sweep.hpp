@@ -19,6 +19,7 @@
 #include "stackbound/cases/pipeline.hpp"
 #include "stackbound/cases/source_map.hpp"
 #include "stackbound/core/species_database.hpp"
+#include "stackbound/emissions/cautions.hpp"
 
 namespace stackbound::cases {
 
@@ -66,6 +67,11 @@ void apply_parameter(CaseDefinition& definition, SweepParameter parameter, doubl
 
 // Checks that every parameter can be applied to the case (before any point runs).
 void check_sweep(const CaseDefinition& definition, const std::vector<VarySpec>& vary);
+
+// The cautions a sweep's outputs carry: the standard ones, and sweep_fixed_temperature when the case
+// states its firing temperature and the sweep varies an operating change that would move a real
+// flame's temperature (excess_air, flue_o2, air_preheat, humidity, o2_enrichment, blend_fraction).
+std::vector<emissions::Caution> sweep_cautions(const CaseDefinition& definition, const std::vector<VarySpec>& vary);
 
 struct SweepPoint {
   std::size_t index = 0;

@@ -1,15 +1,15 @@
 // The `stackbound` command-line program.
 
+#include <CLI/CLI.hpp>
 #include <exception>
 #include <iostream>
 #include <string>
 #include <vector>
 
-#include <CLI/CLI.hpp>
-
 #include "stackbound/cli/commands.hpp"
 #include "stackbound/core/equilibrium.hpp"
 #include "stackbound/units/input_error.hpp"
+#include "stackbound/version.hpp"
 
 int main(int argc, char** argv) {
   namespace sb = stackbound::cli;
@@ -17,6 +17,7 @@ int main(int argc, char** argv) {
                "Results are equilibrium bounds at stated firing conditions, not measurements;\n"
                "permits, regulators, local codes and licensed practice govern."};
   app.require_subcommand(1);
+  app.set_version_flag("--version", std::string("stackbound ") + stackbound::kVersion, "Print the version and exit");
   app.footer("Run `stackbound COMMAND --help` for a command's options and examples.");
   sb::GlobalOptions global;
   app.add_option("--species-file", global.species_file, "Extra species data (YAML, stackbound-species/1 schema)")
@@ -35,6 +36,8 @@ int main(int argc, char** argv) {
     return app.exit(help);
   } catch (const CLI::CallForAllHelp& help) {
     return app.exit(help);
+  } catch (const CLI::CallForVersion& version) {
+    return app.exit(version);
   } catch (const CLI::RequiredError& error) {
     // With no known command given, CLI11 says only "A subcommand is required": name what was typed.
     const std::vector<std::string> rest = app.remaining();

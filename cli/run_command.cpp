@@ -38,7 +38,8 @@ void add_run_command(CLI::App& app, const GlobalOptions& global) {
     const core::SpeciesDatabase database = species_database(global.species_file);
     const RunResult result =
         with_positions(loaded.sources, [&] { return run_case(std::move(loaded.definition), database); });
-    write_output(options->output, render::render_run(result, options->format));
+    const Provenance provenance = make_provenance(result.definition, std::chrono::system_clock::now());
+    write_output(options->output, render::render_run(result, options->format, provenance));
   });
 }
 

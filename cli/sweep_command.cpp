@@ -45,16 +45,18 @@ void run(const SweepCli& cli, const GlobalOptions& global) {
   options.threads = cli.threads;
   options.sources = &loaded.sources;
   options.progress = [&](std::size_t done, std::size_t all) { progress.update(done, all); };
+  const Provenance provenance = make_provenance(definition, std::chrono::system_clock::now());
   OutputStream out(cli.output);
   std::size_t failed = 0;
   if (cli.format == "csv") {
-    render::SweepCsvWriter writer([&out](std::string_view text) { out.write(text); }, vary);
+    render::SweepCsvWriter writer([&out](std::string_view text) { out.write(text); }, vary,
+                                  sweep_cautions(definition, vary), provenance);
     failed = run_sweep(definition, vary, database, [&](const SweepPoint& p) { writer.add(p); }, options);
     writer.finish();
   } else {
     render::SweepHtmlCollector collector(vary);
     failed = run_sweep(definition, vary, database, [&](const SweepPoint& p) { collector.add(p); }, options);
-    out.write(render::render_report(collector.document(definition), "html"));
+    out.write(render::render_report(collector.document(definition, provenance), "html"));
   }
   out.commit();
   if (failed > 0) {

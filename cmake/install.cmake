@@ -14,6 +14,7 @@ foreach(layer units core emissions cases render)
           # internal to the equilibrium solver's sources, not part of the interface
           PATTERN "equilibrium_steps.hpp" EXCLUDE)
 endforeach()
+install(FILES ${PROJECT_BINARY_DIR}/include/stackbound/version.hpp DESTINATION ${CMAKE_INSTALL_INCLUDEDIR}/stackbound)
 install(EXPORT stackboundTargets NAMESPACE stackbound::
         DESTINATION ${CMAKE_INSTALL_LIBDIR}/cmake/stackbound)
 configure_package_config_file(${PROJECT_SOURCE_DIR}/cmake/stackboundConfig.cmake.in

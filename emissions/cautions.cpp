@@ -7,11 +7,11 @@ namespace stackbound::emissions {
 
 namespace {
 
-constexpr std::array<CautionText, 10> kCautions{{
+constexpr std::array<CautionText, 15> kCautions{{
     {Caution::equilibrium_bound, "equilibrium_bound",
      "Figures derived from chemical equilibrium are an equilibrium bound at the stated firing conditions "
-     "(temperature, pressure, fuel, air). Real flames may stay below it (NO forms slowly) or exceed it locally "
-     "(CO from quenching or poor mixing); the bound is not a prediction of what a plant emits."},
+     "(temperature, pressure, fuel, air), not a prediction of what a plant emits: thermal NO forms slowly, so real "
+     "flames usually stay below it."},
     {Caution::not_a_measurement, "not_a_measurement",
      "These are estimates, not measurements. Only a stack test or a certified monitoring system, run by the methods "
      "the permit names, measures what a plant emits."},
@@ -25,8 +25,9 @@ constexpr std::array<CautionText, 10> kCautions{{
      "Reference O2 levels and other values marked as presets come from general rules (e.g. Directive 2010/75/EU "
      "annexes). The plant's permit decides; confirm each preset against it or replace it with the permit's value."},
     {Caution::frozen_composition, "frozen_composition",
-     "The gas composition is taken as frozen from the firing zone to the stack: no reaction, condensation or "
-     "absorption on the way is accounted for (e.g. CO burn-out, NO2 formation, SO3 and water condensation)."},
+     "The bound takes the gas composition as frozen from the firing zone to the stack: no reaction, condensation or "
+     "absorption on the way (NO2 formation, SO3 and water condensation). Only the post-flame estimate and ceiling "
+     "follow NO and CO along the way."},
     {Caution::ideal_gas, "ideal_gas",
      "Gases are treated as ideal: a normal cubic metre is an amount of gas at the named normal conditions, with the "
      "molar volume R T / p. Non-ideality at stack conditions is below what matters for these estimates."},
@@ -39,9 +40,29 @@ constexpr std::array<CautionText, 10> kCautions{{
     {Caution::data_sources, "data_sources",
      "Thermodynamic data, F-factors and molar masses carry their published uncertainty; the sources are named in "
      "the documentation and beside each value."},
+    {Caution::co_well_mixed_only, "co_well_mixed_only",
+     "CO is bounded by these figures only in a well-mixed flame with enough time at temperature: poor mixing, "
+     "quenching on cold surfaces, or too short a residence time leave CO far above every figure here, the ceiling "
+     "included. A CO measurement governs."},
+    {Caution::fuel_nitrogen_unbounded, "fuel_nitrogen_unbounded",
+     "NO from the nitrogen bound in the fuel is not bounded by equilibrium: it forms by kinetics in the flame and "
+     "can exceed the equilibrium NO at the firing temperature. Only the ceiling (all fuel nitrogen as NO) bounds it; "
+     "state fuel.nitrogen_conversion from the plant's data where it is known."},
+    {Caution::primary_zone_needed, "primary_zone_needed",
+     "A gas turbine forms its NO in the primary zone, far hotter than the mixed gas of the stated firing "
+     "conditions; without that zone (firing.primary_zone) the estimate follows the mixed gas only and can lie far "
+     "below the turbine's NOx. State the primary zone from the combustor's data."},
+    {Caution::not_potential_to_emit, "not_potential_to_emit",
+     "The kg/h and t/yr figures are the stated feed and operating hours at the stated conditions; they are not a "
+     "potential-to-emit figure, which the applicable rules define (maximum capacity, worst-case fuel and operation, "
+     "enforceable limits)."},
+    {Caution::sweep_fixed_temperature, "sweep_fixed_temperature",
+     "This sweep holds the stated firing temperature while the operating change varies: in a real flame, excess "
+     "air, air preheat, humidity, enrichment or fuel blend change the flame temperature, and with it NO and CO. The "
+     "figures show the change at a fixed temperature only; use firing.adiabatic: true to let it follow."},
 }};
 
-constexpr std::array<Caution, 8> kStandard{{
+constexpr std::array<Caution, 9> kStandard{{
     Caution::equilibrium_bound,
     Caution::not_a_measurement,
     Caution::not_compliance,
@@ -50,6 +71,7 @@ constexpr std::array<Caution, 8> kStandard{{
     Caution::ideal_gas,
     Caution::complete_mixing,
     Caution::data_sources,
+    Caution::not_potential_to_emit,
 }};
 
 }  // namespace

@@ -18,6 +18,11 @@ enum class Caution {
   complete_mixing,          // one well-mixed zone at one temperature
   o2_correction_validity,   // the O2 correction assumes dilution by air
   data_sources,             // thermodynamic data and factors have their own uncertainty
+  co_well_mixed_only,       // CO is bounded by equilibrium only in a well-mixed flame (when CO is reported)
+  fuel_nitrogen_unbounded,  // NO from fuel-bound nitrogen is not bounded by equilibrium (fuel with nitrogen)
+  primary_zone_needed,      // a gas turbine needs its primary-zone temperature (none stated)
+  not_potential_to_emit,    // bound kg/h and t/yr are not a potential-to-emit figure
+  sweep_fixed_temperature,  // a sweep at a stated firing temperature ignores the temperature change
 };
 
 struct CautionText {
@@ -31,8 +36,11 @@ std::span<const CautionText> all_cautions();
 
 const CautionText& caution(Caution which);
 
-// The cautions every emissions report carries (all except confirm_presets, which is added when a
-// preset was used, and o2_correction_validity, added when an O2 correction was applied).
+// The cautions every emissions report carries. The others are added where they apply:
+// confirm_presets when a preset was used, o2_correction_validity when an O2 correction was applied,
+// co_well_mixed_only when CO is reported, fuel_nitrogen_unbounded for a fuel with bound nitrogen,
+// primary_zone_needed for a gas turbine without firing.primary_zone, sweep_fixed_temperature for a
+// sweep of an operating change at a stated firing temperature.
 std::span<const Caution> standard_cautions();
 
 }  // namespace stackbound::emissions

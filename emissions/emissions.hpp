@@ -9,3 +9,4 @@
 #include "stackbound/emissions/pollutant.hpp"
 #include "stackbound/emissions/reference_correction.hpp"
 #include "stackbound/emissions/reference_o2_presets.hpp"
+#include "stackbound/emissions/screening_reading.hpp"

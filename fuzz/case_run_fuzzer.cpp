@@ -15,8 +15,10 @@ extern "C" int LLVMFuzzerTestOneInput(const std::uint8_t* data, std::size_t size
   try {
     const cases::RunResult result =
         cases::run_case(cases::parse_case(stackbound::fuzz::as_text(data, size), "fuzz.yaml"), cases::builtin_species());
+    const cases::Provenance provenance = cases::make_provenance(result.definition, {});
     for (const char* format : {"text", "json", "csv", "html"}) {
-      if (stackbound::render::render_run(result, format).empty()) stackbound::fuzz::property_failed("empty report");
+      if (stackbound::render::render_run(result, format, provenance).empty())
+        stackbound::fuzz::property_failed("empty report");
     }
   } catch (const stackbound::units::InputError&) {
   } catch (const stackbound::core::ConvergenceError&) {

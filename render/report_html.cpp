@@ -2,13 +2,15 @@
 #include <fmt/format.h>
 
 #include "stackbound/render/report_renderers.hpp"
+#include "stackbound/render/svg_bar_chart.hpp"
 #include "stackbound/render/svg_plot.hpp"
 
 namespace stackbound::render {
 
 namespace {
 
-constexpr const char* kStyle = R"(body{font-family:system-ui,-apple-system,"Segoe UI",sans-serif;max-width:60rem;margin:1.5rem auto;padding:0 1rem;color:#1b1b1b;line-height:1.4}
+constexpr const char* kStyle =
+    R"(body{font-family:system-ui,-apple-system,"Segoe UI",sans-serif;max-width:60rem;margin:1.5rem auto;padding:0 1rem;color:#1b1b1b;line-height:1.4}
 h1{font-size:1.5rem;margin-bottom:.2rem}h2{font-size:1.1rem;margin-top:1.6rem;border-bottom:1px solid #999}
 .subtitle{color:#333;margin-top:0}
 table{border-collapse:collapse;margin:.5rem 0;font-size:.9rem}
@@ -18,9 +20,33 @@ dl.summary{display:grid;grid-template-columns:max-content auto;gap:.1rem 1rem}dl
 .flags{border-left:4px solid #b9770e;padding:.3rem .8rem;background:#fdf5e6}
 .cautions{border:2px solid #7b241c;padding:.3rem .8rem;background:#fbeeee}
 .note{font-size:.85rem;color:#333}
+.headline{border:1px solid #1f4e79;padding:.3rem .8rem}.headline figure{margin:.3rem 0}
 svg{max-width:100%;height:auto;margin:.5rem 0}
 @media print{body{margin:0;max-width:none}h2{break-after:avoid}table,svg{break-inside:avoid}}
 )";
+
+std::string table_html(const ReportTable& table) {
+  std::string html = "<h2>" + escape_html(table.title) + "</h2>\n<table>\n<thead><tr>";
+  for (const std::string& column : table.columns) html += "<th>" + escape_html(column) + "</th>";
+  html += "</tr></thead>\n<tbody>\n";
+  for (const auto& row : table.rows) {
+    html += "<tr>";
+    for (const std::string& cell : row) html += "<td>" + escape_html(cell) + "</td>";
+    html += "</tr>\n";
+  }
+  html += "</tbody>\n</table>\n";
+  for (const std::string& note : table.notes) html += "<p class=\"note\">" + escape_html(note) + "</p>\n";
+  return html;
+}
+
+// The headline table and its bar charts, before everything else.
+std::string headline_html(const Report& report) {
+  if (report.headline.rows.empty()) return {};
+  std::string html = "<section class=\"headline\">\n" + table_html(report.headline);
+  for (const ReportBarChart& chart : report.headline_charts)
+    html += "<figure>" + render_svg_bar_chart(chart) + "</figure>\n";
+  return html + "</section>\n";
+}
 
 }  // namespace
 
@@ -29,6 +55,7 @@ std::string render_html(const Report& report) {
   html += "<title>" + escape_html(report.title) + "</title>\n<style>\n" + kStyle + "</style>\n</head>\n<body>\n";
   html += "<h1>" + escape_html(report.title) + "</h1>\n";
   if (!report.subtitle.empty()) html += "<p class=\"subtitle\">" + escape_html(report.subtitle) + "</p>\n";
+  html += headline_html(report);
   if (!report.cautions.empty()) {
     html += "<section class=\"cautions\"><h2>Cautions</h2><ul>\n";
     for (const std::string& caution : report.cautions) html += "<li>" + escape_html(caution) + "</li>\n";
@@ -46,18 +73,7 @@ std::string render_html(const Report& report) {
     for (const std::string& flag : report.flags) html += "<li>" + escape_html(flag) + "</li>\n";
     html += "</ul></section>\n";
   }
-  for (const ReportTable& table : report.tables) {
-    html += "<h2>" + escape_html(table.title) + "</h2>\n<table>\n<thead><tr>";
-    for (const std::string& column : table.columns) html += "<th>" + escape_html(column) + "</th>";
-    html += "</tr></thead>\n<tbody>\n";
-    for (const auto& row : table.rows) {
-      html += "<tr>";
-      for (const std::string& cell : row) html += "<td>" + escape_html(cell) + "</td>";
-      html += "</tr>\n";
-    }
-    html += "</tbody>\n</table>\n";
-    for (const std::string& note : table.notes) html += "<p class=\"note\">" + escape_html(note) + "</p>\n";
-  }
+  for (const ReportTable& table : report.tables) html += table_html(table);
   if (!report.plots.empty()) {
     html += "<h2>Plots</h2>\n";
     for (const ReportPlot& plot : report.plots) html += "<figure>" + render_svg_plot(plot) + "</figure>\n";

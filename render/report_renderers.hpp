@@ -9,6 +9,7 @@ namespace stackbound::render {
 
 using cases::PlotSeries;
 using cases::Report;
+using cases::ReportBarChart;
 using cases::ReportPlot;
 using cases::ReportTable;
 

@@ -48,34 +48,38 @@ void append_wrapped(std::string& out, const std::string& prefix, const std::stri
   out += line + "\n";
 }
 
+void append_table(std::string& out, const ReportTable& table) {
+  out += "\n" + table.title + "\n" + std::string(display_width(table.title), '-') + "\n";
+  std::vector<std::size_t> widths(table.columns.size(), 0);
+  for (std::size_t c = 0; c < table.columns.size(); ++c) widths[c] = display_width(table.columns[c]);
+  for (const auto& row : table.rows) {
+    for (std::size_t c = 0; c < row.size() && c < widths.size(); ++c)
+      widths[c] = std::max(widths[c], display_width(row[c]));
+  }
+  std::string header = " ";
+  for (std::size_t c = 0; c < table.columns.size(); ++c) header += " " + pad(table.columns[c], widths[c], c > 0);
+  out += header + "\n";
+  for (const auto& row : table.rows) {
+    std::string line = " ";
+    for (std::size_t c = 0; c < row.size() && c < widths.size(); ++c) {
+      line += " " + pad(row[c], widths[c], c > 0 && looks_numeric(row[c]));
+    }
+    out += line + "\n";
+  }
+  for (const std::string& note : table.notes) append_wrapped(out, "  note: ", note);
+}
+
 }  // namespace
 
 std::string render_text(const Report& report) {
   std::string out = report.title + "\n" + std::string(display_width(report.title), '=') + "\n";
   if (!report.subtitle.empty()) append_wrapped(out, "", report.subtitle);
+  if (!report.headline.rows.empty()) append_table(out, report.headline);
   out += "\n";
   std::size_t label_width = 0;
   for (const auto& [label, value] : report.summary) label_width = std::max(label_width, display_width(label));
   for (const auto& [label, value] : report.summary) out += "  " + pad(label, label_width, false) + " : " + value + "\n";
-  for (const ReportTable& table : report.tables) {
-    out += "\n" + table.title + "\n" + std::string(display_width(table.title), '-') + "\n";
-    std::vector<std::size_t> widths(table.columns.size(), 0);
-    for (std::size_t c = 0; c < table.columns.size(); ++c) widths[c] = display_width(table.columns[c]);
-    for (const auto& row : table.rows) {
-      for (std::size_t c = 0; c < row.size() && c < widths.size(); ++c) widths[c] = std::max(widths[c], display_width(row[c]));
-    }
-    std::string header = " ";
-    for (std::size_t c = 0; c < table.columns.size(); ++c) header += " " + pad(table.columns[c], widths[c], c > 0);
-    out += header + "\n";
-    for (const auto& row : table.rows) {
-      std::string line = " ";
-      for (std::size_t c = 0; c < row.size() && c < widths.size(); ++c) {
-        line += " " + pad(row[c], widths[c], c > 0 && looks_numeric(row[c]));
-      }
-      out += line + "\n";
-    }
-    for (const std::string& note : table.notes) append_wrapped(out, "  note: ", note);
-  }
+  for (const ReportTable& table : report.tables) append_table(out, table);
   if (!report.flags.empty()) {
     out += "\nFindings\n--------\n";
     for (const std::string& flag : report.flags) append_wrapped(out, "  ! ", flag);

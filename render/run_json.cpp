@@ -156,7 +156,11 @@ nlohmann::json post_flame_json(const RunResult& r) {
 
 }  // namespace
 
-nlohmann::json run_json(const RunResult& r) {
+nlohmann::json provenance_json(const Provenance& p) {
+  return {{"version", p.version}, {"run_at", p.run_at}, {"case_sha256", p.case_sha256}};
+}
+
+nlohmann::json run_json(const RunResult& r, const Provenance& provenance) {
   using nlohmann::json;
   json mole_fractions = json::object();
   json moles = json::object();
@@ -174,6 +178,8 @@ nlohmann::json run_json(const RunResult& r) {
   for (const LimitScreening& l : r.screening.limits) {
     limits.push_back({{"pollutant", l.pollutant},
                       {"limit", l.limit_text},
+                      {"limit_index", l.limit_index},
+                      {"source", em::screening_source_name(l.source)},
                       {"value", l.result.value},
                       {"limit_value", l.result.limit},
                       {"unit", l.result.unit},
@@ -181,7 +187,9 @@ nlohmann::json run_json(const RunResult& r) {
                       {"margin", l.result.margin},
                       {"fraction_of_limit", l.result.fraction_of_limit},
                       {"outcome", em::screening_outcome_name(l.result.outcome)},
-                      {"wording", l.result.wording}});
+                      {"wording", l.result.wording},
+                      {"reading", l.reading},
+                      {"conclusion", l.conclusion}});
   }
   json measured = json::array();
   for (const MeasuredComparison& m : r.screening.measured) {
@@ -199,8 +207,12 @@ nlohmann::json run_json(const RunResult& r) {
   for (const auto& [name, x] : r.resolved.combustion.flue.mole_fractions(core::GasBasis::dry)) flue_dry[name] = x;
   const core::FuelFeed& feed = r.resolved.rates.feed;
   return {
-      {"case", {{"title", r.definition.title}, {"description", r.definition.description}, {"file", r.definition.origin},
-                {"plant_type", r.definition.plant_type}}},
+      {"case",
+       {{"title", r.definition.title},
+        {"description", r.definition.description},
+        {"file", r.definition.origin},
+        {"plant_type", r.definition.plant_type}}},
+      {"provenance", provenance_json(provenance)},
       {"bound_statement", kBoundStatement},
       {"fuel",
        {{"name", r.resolved.fuel.name()},
@@ -244,7 +256,8 @@ nlohmann::json run_json(const RunResult& r) {
         {"dry_flow_Nm3_per_h", normal_m3_per_h(r.stack.dry_mol_per_s, *r.emissions.normal)},
         {"actual_flow_m3_per_h", r.stack.actual_m3_per_s * kSecondsPerHour}}},
       {"reference_o2_percent", r.emissions.reference_o2_dry * 100.0},
-      {"reference_o2", {{"text", r.emissions.reference_o2_text}, {"from_preset", r.emissions.reference_o2_from_preset}}},
+      {"reference_o2",
+       {{"text", r.emissions.reference_o2_text}, {"from_preset", r.emissions.reference_o2_from_preset}}},
       {"o2_basis_percent", em::o2_basis_percent(r.definition.report.o2_basis)},
       {"normal_conditions", {{"key", r.emissions.normal->key}, {"description", r.emissions.normal->description}}},
       {"post_flame", post_flame_json(r)},

@@ -4,9 +4,13 @@
 #include <nlohmann/json.hpp>
 
 #include "stackbound/cases/pipeline.hpp"
+#include "stackbound/cases/provenance.hpp"
 
 namespace stackbound::render {
 
-nlohmann::json run_json(const cases::RunResult& result);
+// {version, run_at, case_sha256}: the `provenance` object of every JSON output.
+nlohmann::json provenance_json(const cases::Provenance& provenance);
+
+nlohmann::json run_json(const cases::RunResult& result, const cases::Provenance& provenance);
 
 }  // namespace stackbound::render

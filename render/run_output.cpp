@@ -7,9 +7,9 @@
 
 namespace stackbound::render {
 
-std::string render_run(const cases::RunResult& result, const std::string& format) {
-  if (format == "json") return json_text(run_json(result));
-  return render_report(cases::run_document(result), format);
+std::string render_run(const cases::RunResult& result, const std::string& format, const cases::Provenance& provenance) {
+  if (format == "json") return json_text(run_json(result, provenance));
+  return render_report(cases::run_document(result, provenance), format);
 }
 
 }  // namespace stackbound::render

@@ -19,10 +19,13 @@ namespace stackbound::render {
 
 using namespace stackbound::cases;
 
-SweepCsvWriter::SweepCsvWriter(Sink sink, const std::vector<VarySpec>& vary) : sink_(std::move(sink)), vary_(vary) {
+SweepCsvWriter::SweepCsvWriter(Sink sink, const std::vector<VarySpec>& vary,
+                               const std::vector<emissions::Caution>& cautions, const Provenance& provenance)
+    : sink_(std::move(sink)), vary_(vary) {
   sink_(fmt::format("# stackbound sweep: CO and NO figures are the {}; screening estimates, not measurements.\n",
                     kBoundStatement));
-  for (const emissions::Caution c : emissions::standard_cautions()) {
+  sink_("# provenance: " + provenance_line(provenance) + "\n");
+  for (const emissions::Caution c : cautions) {
     sink_("# caution: " + std::string(emissions::caution(c).text) + "\n");
   }
 }

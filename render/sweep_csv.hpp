@@ -9,6 +9,7 @@
 #include <vector>
 
 #include "stackbound/cases/pipeline.hpp"
+#include "stackbound/cases/provenance.hpp"
 #include "stackbound/cases/run_metrics.hpp"
 #include "stackbound/cases/sweep.hpp"
 
@@ -17,8 +18,10 @@ namespace stackbound::render {
 class SweepCsvWriter {
  public:
   using Sink = std::function<void(std::string_view)>;
-  // Writes the comment lines at once; `vary` must outlive the writer.
-  SweepCsvWriter(Sink sink, const std::vector<cases::VarySpec>& vary);
+  // Writes the comment lines at once (the bound statement, `cautions`: cases::sweep_cautions()); `vary`
+  // must outlive the writer.
+  SweepCsvWriter(Sink sink, const std::vector<cases::VarySpec>& vary, const std::vector<emissions::Caution>& cautions,
+                 const cases::Provenance& provenance);
 
   void add(const cases::SweepPoint& point);
   // Writes the header if no point ran, and the rows still waiting for it.

@@ -32,13 +32,14 @@ void SweepHtmlCollector::add(const SweepPoint& point) {
   rows_.push_back(std::move(row));
 }
 
-Report SweepHtmlCollector::document(const CaseDefinition& definition) const {
+Report SweepHtmlCollector::document(const CaseDefinition& definition, const Provenance& provenance) const {
   Report report;
   report.title = "Sweep: " + definition.title;
   report.subtitle = fmt::format("CO and NO figures are the {} of each point: screening estimates from chemical "
                                 "equilibrium, not measurements and not compliance determinations.",
                                 kBoundStatement);
   report.summary.emplace_back("Case file", definition.origin);
+  for (auto& row : provenance_summary(provenance)) report.summary.push_back(std::move(row));
   for (const VarySpec& v : vary_) report.summary.emplace_back("Varied", v.text);
   report.summary.emplace_back("Points", fmt::format("{} ({} failed)", rows_.size(), failed_));
   const std::string x_label = sweep_parameter_label(vary_.front().parameter);
@@ -55,7 +56,8 @@ Report SweepHtmlCollector::document(const CaseDefinition& definition) const {
   report.plots.push_back(plot("Flue-gas O2", "O2 [% dry]", "flue_o2_dry_percent"));
   report.tables.push_back(points_table());
   if (failed_ > 0) report.flags.push_back(fmt::format("{} points failed; their rows say why.", failed_));
-  for (const emissions::Caution c : emissions::standard_cautions()) report.cautions.emplace_back(emissions::caution(c).text);
+  for (const emissions::Caution c : sweep_cautions(definition, vary_))
+    report.cautions.emplace_back(emissions::caution(c).text);
   return report;
 }
 

@@ -8,6 +8,7 @@
 #include <string>
 #include <vector>
 
+#include "stackbound/cases/provenance.hpp"
 #include "stackbound/cases/report_document.hpp"
 #include "stackbound/cases/run_metrics.hpp"
 #include "stackbound/cases/sweep.hpp"
@@ -25,7 +26,7 @@ class SweepHtmlCollector {
   explicit SweepHtmlCollector(const std::vector<cases::VarySpec>& vary) : vary_(vary) {}
 
   void add(const cases::SweepPoint& point);
-  cases::Report document(const cases::CaseDefinition& definition) const;
+  cases::Report document(const cases::CaseDefinition& definition, const cases::Provenance& provenance) const;
 
  private:
   struct Row {

@@ -33,7 +33,7 @@ TEST(Pipeline, RunCaseIsTheStagesComposedInOrder) {
   const PostFlame post_flame = post_flame_stage(definition, resolved, fired);
   const StackGas stack = stack_stage(definition.stack, definition.report.o2_basis, resolved, fired, true);
   const EmissionFigures figures = emissions_stage(definition, resolved, fired, stack, {}, &post_flame);
-  const Screening screening = screening_stage({definition, resolved, fired, stack, figures}, db);
+  const Screening screening = screening_stage({definition, resolved, fired, stack, figures, post_flame}, db);
 
   EXPECT_TRUE(is_close(run.fired.temperature_K, fired.temperature_K, 0.0));
   EXPECT_TRUE(is_close(run.stack.o2_dry, stack.o2_dry, 0.0));

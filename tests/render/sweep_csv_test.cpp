@@ -46,7 +46,8 @@ TEST(SweepCsv, FailedFirstPointWaitsForTheHeaderOfTheFirstPointThatRan) {
   const CaseDefinition definition = load_case(std::string(STACKBOUND_SOURCE_DIR) + "/cases/examples/gas_boiler.yaml");
   const std::vector<VarySpec> vary{parse_vary("excess_air=10%:20%:2")};
   std::string out;
-  SweepCsvWriter writer([&out](std::string_view text) { out += text; }, vary);
+  SweepCsvWriter writer([&out](std::string_view text) { out += text; }, vary, sweep_cautions(definition, vary),
+                        make_provenance(definition, {}));
   SweepPoint failed{0, {0.10}, std::nullopt, "invented failure, with a comma"};
   writer.add(failed);
   EXPECT_EQ(out.find("point,"), std::string::npos) << "header written before any point ran";
@@ -75,7 +76,8 @@ TEST(SweepCsv, AReferenceO2SweepNamesNoSingleO2InItsHeader) {
   CaseDefinition definition = load_case(std::string(STACKBOUND_SOURCE_DIR) + "/cases/examples/gas_boiler.yaml");
   const std::vector<VarySpec> vary{parse_vary("reference_o2=3%:15%:2")};
   std::string out;
-  SweepCsvWriter writer([&out](std::string_view text) { out += text; }, vary);
+  SweepCsvWriter writer([&out](std::string_view text) { out += text; }, vary, sweep_cautions(definition, vary),
+                        make_provenance(definition, {}));
   apply_parameter(definition, vary[0].parameter, 0.03);
   writer.add(SweepPoint{0, {0.03}, run_case(definition, builtin_species()), ""});
   writer.finish();
@@ -115,7 +117,8 @@ TEST(SweepCsv, EstimateAndCeilingColumnsCarryTheRunsFigures) {
   apply_parameter(definition, vary[0].parameter, 0.10);
   const RunResult run = run_case(definition, builtin_species());
   std::string out;
-  SweepCsvWriter writer([&out](std::string_view text) { out += text; }, vary);
+  SweepCsvWriter writer([&out](std::string_view text) { out += text; }, vary, sweep_cautions(definition, vary),
+                        make_provenance(definition, {}));
   writer.add(SweepPoint{0, {0.10}, run, ""});
   writer.finish();
   const std::vector<std::string> rows = data_rows(out);
@@ -147,7 +150,8 @@ TEST(SweepCsv, AnEstimateAPointDoesNotHaveIsAnEmptyCell) {
   const RunResult run = run_case(definition, builtin_species());
   ASSERT_FALSE(run.post_flame.thermal_no.has_value());
   std::string out;
-  SweepCsvWriter writer([&out](std::string_view text) { out += text; }, vary);
+  SweepCsvWriter writer([&out](std::string_view text) { out += text; }, vary, sweep_cautions(definition, vary),
+                        make_provenance(definition, {}));
   writer.add(SweepPoint{0, {0.10}, run, ""});
   writer.finish();
   const std::vector<std::string> rows = data_rows(out);
