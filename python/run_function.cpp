@@ -1,9 +1,12 @@
 // stackbound.run(case): the `run --format json` document of a case file or a case dict.
 
+#include <chrono>
+
 #include "case_argument.hpp"
 #include "functions.hpp"
 #include "python_values.hpp"
 #include "stackbound/cases/pipeline.hpp"
+#include "stackbound/cases/provenance.hpp"
 #include "stackbound/render/finite_figures.hpp"
 #include "stackbound/render/run_json.hpp"
 
@@ -14,12 +17,13 @@ namespace {
 py::object run(py::handle case_value, py::handle species_file) {
   cases::LoadedCase loaded = load_case_argument(case_value);
   const core::SpeciesDatabase database = species_argument(species_file);
+  const cases::Provenance provenance = cases::make_provenance(loaded.definition, std::chrono::system_clock::now());
   nlohmann::json document;
   {
     const py::gil_scoped_release release;
     const cases::RunResult result =
         cases::with_positions(loaded.sources, [&] { return cases::run_case(std::move(loaded.definition), database); });
-    document = render::run_json(result);
+    document = render::run_json(result, provenance);
     render::require_finite_json(document);
   }
   return to_python(document);
