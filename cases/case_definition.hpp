@@ -10,6 +10,7 @@
 #include <variant>
 #include <vector>
 
+#include "stackbound/core/combustion.hpp"
 #include "stackbound/core/fuel.hpp"
 #include "stackbound/emissions/concentration.hpp"
 #include "stackbound/emissions/limit_screening.hpp"
@@ -18,6 +19,7 @@
 #include "stackbound/emissions/reference_o2_presets.hpp"
 #include "stackbound/units/normal_conditions.hpp"
 #include "stackbound/units/quantity_parser.hpp"
+#include "stackbound/units/warning.hpp"
 
 namespace stackbound::cases {
 
@@ -51,6 +53,8 @@ struct BlendComponent {
 struct FuelFeedSpec {
   FuelSpec fuel;
   units::ParsedQuantity feed_rate;             // mass flow, molar flow (normal volume) or power
+  // The heating value a heat-input feed_rate is on (fuel.heating_value_basis; HHV by default).
+  core::HeatInputBasis heat_input_basis = core::HeatInputBasis::hhv;
   double temperature_K = 298.15;
   // Fraction of the fuel-bound nitrogen leaving as NO (core/fuel_nitrogen.hpp), 0 ... 1; nullopt: the
   // typical band of the fuel's class (post-flame stage).
@@ -166,6 +170,9 @@ struct CaseDefinition {
   PostFlameSpec post_flame;
   StackSpec stack;
   ReportSpec report;
+  // Legal but implausible values found at load (a fraction typed as a percent ...); the run adds its
+  // own (run_warnings.hpp) and every output prints them all.
+  std::vector<units::Warning> warnings;
 };
 
 }  // namespace stackbound::cases

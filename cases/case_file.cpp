@@ -84,6 +84,18 @@ FuelFeedSpec fuel_feed(const YamlField& fuel) {
   feed.feed_rate = rate.quantity({Dimension::mass_flow, Dimension::molar_flow, Dimension::power});
   if (feed.feed_rate.value_si <= 0.0) rate.fail("must be > 0");
   if (const auto problem = outside(feed.feed_rate.value_si, feed_range(feed.feed_rate.dimension))) rate.fail(*problem);
+  // heating_value_basis states the basis of a heat-input feed (every fuel kind) and of a measured
+  // heating value; with neither it would change nothing, so it is refused.
+  if (const auto basis = fuel.optional("heating_value_basis")) {
+    const bool lower = basis->choice({"HHV", "LHV"}) == "LHV";
+    if (feed.feed_rate.dimension == Dimension::power) {
+      feed.heat_input_basis = lower ? core::HeatInputBasis::lhv : core::HeatInputBasis::hhv;
+    } else if (!heating_value_basis_applies(feed.fuel)) {
+      basis->fail(fmt::format("states the basis of a heat-input fuel.feed_rate (\"12 MW\") or of fuel.heating_value; "
+                              "this case has neither (feed_rate \"{}\" is not a heat input)",
+                              rate.text()));
+    }
+  }
   if (const auto t = fuel.optional("temperature")) feed.temperature_K = temperature_K(*t);
   if (const auto f = fuel.optional("nitrogen_conversion")) {
     feed.nitrogen_conversion = fraction_in(*f, 0.0, 1.0, "must be between 0 % and 100 % of the fuel-bound nitrogen");
@@ -102,6 +114,12 @@ AirSpec air_spec(const std::optional<YamlField>& air) {
   }
   if (const auto rh = air->optional("relative_humidity")) {
     spec.relative_humidity = fraction_in(*rh, 0.0, 1.0, "must be between 0 % and 100 %");
+  }
+  // The ambient state is that of the relative humidity; without one it would change nothing.
+  for (const char* key : {"ambient_temperature", "ambient_pressure"}) {
+    if (const auto node = air->optional(key); node && !spec.relative_humidity) {
+      node->fail("applies only with air.relative_humidity (the ambient state at which it is stated)");
+    }
   }
   if (const auto t = air->optional("ambient_temperature")) spec.ambient_temperature_K = temperature_K(*t);
   if (const auto p = air->optional("ambient_pressure")) spec.ambient_pressure_Pa = pressure_Pa(*p, kAmbientPressure);
@@ -311,6 +329,39 @@ ReportSpec report_spec(const YamlField& report) {
   return spec;
 }
 
+// An O2 between 0 and kLowO2Percent percent as written is more likely a fraction typed as a percent
+// ("0.03 %" for 3 %) than a flue gas (common practice, no source: lean firing reads 1 % and more).
+constexpr double kLowO2Percent = 0.21;
+
+void warn_low_o2(const std::string& field, const std::string& text, double fraction, std::vector<units::Warning>& warnings) {
+  const double percent = fraction * 100.0;
+  if (!(percent > 0.0 && percent < kLowO2Percent)) return;
+  warnings.push_back({field, text, fmt::format("below {} % O2, near-stoichiometric firing; if {:g} is a fraction, write "
+                                               "\"{:g} %\"; used as {:g} % O2",
+                                               kLowO2Percent, percent, percent * 100.0, percent)});
+}
+
+// Values that load but look wrong: each becomes a warning naming the field and the value.
+std::vector<units::Warning> load_warnings(const CaseDefinition& definition, const YamlField& root) {
+  std::vector<units::Warning> warnings;
+  if (definition.operating.mode == OperatingMode::flue_o2) {
+    warn_low_o2("operating_point.flue_o2", root.required("operating_point").required("flue_o2").text(),
+                definition.operating.value, warnings);
+  }
+  if (const auto& o2 = definition.stack.measured.o2; o2 && !o2->value.basis().unit.is_mass()) {
+    warn_low_o2("stack.measured.o2", o2->text, o2->value.value() * o2->value.basis().unit.factor, warnings);
+  }
+  const FiringSpec& firing = definition.firing;
+  if (!firing.adiabatic && firing.temperature_K < definition.stack.temperature_K) {
+    warnings.push_back({"firing.temperature", root.required("firing").required("temperature").text(),
+                        fmt::format("{:.2f} K is below the stack temperature ({:.2f} K{}): a flame or furnace is "
+                                    "hotter than its stack; check the value and its unit",
+                                    firing.temperature_K, definition.stack.temperature_K,
+                                    definition.stack.temperature_stated ? "" : ", the default 150 degC")});
+  }
+  return warnings;
+}
+
 // "preset" (stated, or the default) needs a plant type with a reference-O2 preset.
 void check_reference_o2(const CaseDefinition& definition, const std::optional<YamlField>& report) {
   if (definition.reference_o2_preset != nullptr || definition.report.reference_o2_fraction) return;
@@ -345,6 +396,7 @@ LoadedCase parse_case_file(std::string_view text, const std::string& origin) {
   definition.stack = stack_spec(root.optional("stack"), normal_conditions(report));
   if (report) definition.report = report_spec(*report);
   check_reference_o2(definition, report);
+  definition.warnings = load_warnings(definition, root);
   // A section left out is the file's: errors about its defaults are reported at the file.
   for (const std::string_view section : kSections) {
     if (!loaded.sources.location_of(section)) loaded.sources.add(std::string(section), origin);

@@ -286,7 +286,7 @@ Report run_document(const RunResult& r) {
   report.tables.push_back(flue_table(r));
   report.tables.push_back(species_table(r.fired));
   report.flags = r.screening.findings;
-  for (const std::string& warning : r.screening.warnings) report.flags.push_back("Note: " + warning);
+  for (const units::Warning& warning : r.screening.warnings) report.warnings.push_back(units::warning_text(warning));
   report.assumptions = r.screening.assumptions;
   report.cautions = r.screening.cautions;
   return report;

@@ -52,7 +52,7 @@ ResolvedCase resolve_stage(const CaseDefinition& definition, const core::Species
   core::OperatingPoint op = at_field(operating, [&] { return build_operating_point(definition); });
   core::CombustionResult combustion = at_field(operating, [&] { return core::burn(fuel, oxidant, op, database); });
   const core::FuelFeed feed = at_field("fuel.feed_rate", [&] {
-    return core::resolve_feed(fuel, definition.fuel.feed_rate, core::HeatInputBasis::hhv, "fuel.feed_rate");
+    return core::resolve_feed(fuel, definition.fuel.feed_rate, definition.fuel.heat_input_basis, "fuel.feed_rate");
   });
   core::CombustionRates rates = core::rates(combustion, feed);
   // Moved into the result: the locals above are not const for that reason only.

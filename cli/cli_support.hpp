@@ -11,9 +11,11 @@
 #include <CLI/CLI.hpp>
 
 #include "stackbound/cases/plausible_ranges.hpp"
+#include "stackbound/cases/source_map.hpp"
 #include "stackbound/cli/output_file.hpp"
 #include "stackbound/core/species_database.hpp"
 #include "stackbound/units/quantities.hpp"
+#include "stackbound/units/warning.hpp"
 
 namespace stackbound::cli {
 
@@ -35,6 +37,10 @@ CLI::Option* add_format_option(CLI::App& command, std::string& format, const std
 // A pressure option parsed and checked against the range the tool accepts for it (plausible_ranges.hpp);
 // InputError '<option> = "<text>": outside ...' otherwise.
 units::Pressure checked_pressure(std::string_view text, std::string_view option, const cases::PlausibleRange& range);
+
+// Prints each warning on stderr as 'stackbound: warning: FILE:LINE:COLUMN: field = "value": message',
+// at the field's position in `sources` (else the file's name).
+void print_warnings(const std::vector<units::Warning>& warnings, const cases::SourceMap& sources);
 
 // Splits "CO2,CO, O2" into trimmed names; empty items are an InputError naming the option.
 std::vector<std::string> split_list(std::string_view text, std::string_view option);

@@ -36,9 +36,11 @@ void add_compare_command(CLI::App& app, const GlobalOptions& global) {
   command->callback([cli, &global] {
     const core::SpeciesDatabase database = species_database(global.species_file);
     const Comparison comparison = compare(cli->case_files, database);
-    write_output(cli->output, cli->format == "json"
-                                  ? render::json_text(render::comparison_json(comparison))
-                                  : render::render_report(cases::comparison_document(comparison), cli->format));
+    const std::string text = cli->format == "json"
+                                 ? render::json_text(render::comparison_json(comparison))
+                                 : render::render_report(cases::comparison_document(comparison), cli->format);
+    for (const RunResult& run : comparison.runs) print_warnings(run.screening.warnings, SourceMap(run.definition.origin));
+    write_output(cli->output, text);
   });
 }
 

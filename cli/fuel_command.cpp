@@ -14,6 +14,7 @@
 #include <nlohmann/json.hpp>
 
 #include "stackbound/render/finite_figures.hpp"
+#include "stackbound/render/warnings_json.hpp"
 #include "stackbound/cli/commands.hpp"
 #include "stackbound/cases/fuel_file.hpp"
 #include "stackbound/cases/species_file.hpp"
@@ -374,7 +375,7 @@ std::string text_report(const FuelOptions& o, const core::Fuel& fuel, const core
 
   if (!r.warnings.empty()) {
     t += "\nWarnings\n";
-    for (const std::string& w : r.warnings) t += fmt::format("  - {}\n", w);
+    for (const units::Warning& w : r.warnings) t += fmt::format("  - {}\n", units::warning_text(w));
   }
   t += fmt::format("\n{}\n", kCaution);
   return t;
@@ -450,7 +451,7 @@ nlohmann::json json_report(const FuelOptions& o, const core::Fuel& fuel, const c
       {"Fw_m3_per_GJ", r.f_factors.fw_m3_per_GJ()},
       {"Fc_m3_per_GJ", r.f_factors.fc_m3_per_GJ()},
       {"f_factor_conditions", "US EPA Method 19 definitions; 20 degC (68 degF), 101.325 kPa; HHV"},
-      {"warnings", r.warnings},
+      {"warnings", render::warnings_json(r.warnings)},
       {"caution", caution_one_line()},
   };
   if (rates) {

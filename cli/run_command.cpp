@@ -38,7 +38,9 @@ void add_run_command(CLI::App& app, const GlobalOptions& global) {
     const core::SpeciesDatabase database = species_database(global.species_file);
     const RunResult result =
         with_positions(loaded.sources, [&] { return run_case(std::move(loaded.definition), database); });
-    write_output(options->output, render::render_run(result, options->format));
+    const std::string text = render::render_run(result, options->format);
+    print_warnings(result.screening.warnings, loaded.sources);
+    write_output(options->output, text);
   });
 }
 

@@ -46,6 +46,11 @@ std::string render_html(const Report& report) {
     for (const std::string& flag : report.flags) html += "<li>" + escape_html(flag) + "</li>\n";
     html += "</ul></section>\n";
   }
+  if (!report.warnings.empty()) {
+    html += "<section class=\"flags\"><h2>Warnings</h2><ul>\n";
+    for (const std::string& warning : report.warnings) html += "<li>" + escape_html(warning) + "</li>\n";
+    html += "</ul></section>\n";
+  }
   for (const ReportTable& table : report.tables) {
     html += "<h2>" + escape_html(table.title) + "</h2>\n<table>\n<thead><tr>";
     for (const std::string& column : table.columns) html += "<th>" + escape_html(column) + "</th>";

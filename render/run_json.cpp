@@ -1,6 +1,7 @@
 #include "stackbound/render/run_json.hpp"
 
 #include "stackbound/cases/run_document.hpp"
+#include "stackbound/render/warnings_json.hpp"
 #include "stackbound/units/constants.hpp"
 
 #include <optional>
@@ -252,7 +253,7 @@ nlohmann::json run_json(const RunResult& r) {
       {"limits", limits},
       {"measured", measured},
       {"findings", r.screening.findings},
-      {"warnings", r.screening.warnings},
+      {"warnings", warnings_json(r.screening.warnings)},
       {"assumptions", r.screening.assumptions},
       {"cautions", r.screening.cautions},
       {"caution_keys", r.screening.caution_keys},
