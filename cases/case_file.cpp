@@ -282,10 +282,10 @@ LimitSpec limit_spec(const YamlField& limit, const ReportSpec& report) {
   }
   const std::string text = value.text();
   const std::string rest = value.located([&] { return em::split_stated_value(text, value.path()).rest; });
-  const std::string unit = rest.substr(0, rest.find(','));
-  const auto first = unit.find_first_not_of(" \t");
-  const auto last = unit.find_last_not_of(" \t");
-  if (first != std::string::npos && em::find_concentration_unit(unit.substr(first, last - first + 1))) {
+  // The unit is the first word: "mg/Nm3, dry, O2=3%", "ppmvd @ 3% O2".
+  const auto first = rest.find_first_not_of(" \t");
+  const std::string unit = first == std::string::npos ? "" : rest.substr(first, rest.find_first_of(", \t@", first) - first);
+  if (!unit.empty() && em::find_concentration_unit(unit)) {
     return {pollutant, text, stated_concentration(value, *reported, *report.normal)};
   }
   const em::RateLimit rate = value.located([&] { return em::parse_rate_limit(text, value.path()); });
