@@ -13,6 +13,7 @@
 #include "stackbound/core/combustion.hpp"
 #include "stackbound/core/fuel.hpp"
 #include "stackbound/emissions/concentration.hpp"
+#include "stackbound/emissions/emission_rate.hpp"
 #include "stackbound/emissions/limit_screening.hpp"
 #include "stackbound/emissions/pollutant.hpp"
 #include "stackbound/emissions/reference_correction.hpp"
@@ -146,6 +147,17 @@ struct LimitSpec {
   std::variant<emissions::Concentration, emissions::RateLimit> limit;
 };
 
+// Which F-factors the rates per heat input (Method 19) use: the fuel's own, computed from its
+// composition (default); the published defaults of Method 19 Table 19-2 (emissions/published_f_factors.hpp)
+// for the fuel preset's type or a named table entry; or the case's own.
+enum class FFactorChoice { computed, published, stated };
+
+struct FFactorSpec {
+  FFactorChoice choice = FFactorChoice::computed;
+  std::string table_key;                        // published: the entry; empty: the fuel preset's
+  std::optional<emissions::FFactor> fd, fw, fc;  // stated (Fd required); unstated ones stay computed
+};
+
 struct ReportSpec {
   std::optional<double> reference_o2_fraction;  // nullopt: the plant type's preset
   emissions::O2Basis o2_basis = emissions::O2Basis::us_epa_20_9;  // 20.9 % (US EPA) or 21 % (EU)
@@ -155,6 +167,7 @@ struct ReportSpec {
                                                emissions::pollutant_by_name("NOx", "report.pollutants")};
   double operating_hours_h = 8760.0;
   std::vector<LimitSpec> limits;
+  FFactorSpec f_factors;
 };
 
 struct CaseDefinition {

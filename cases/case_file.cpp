@@ -11,6 +11,7 @@
 #include "stackbound/cases/plausible_ranges.hpp"
 #include "stackbound/cases/yaml_reader.hpp"
 #include "stackbound/emissions/basis.hpp"
+#include "stackbound/emissions/published_f_factors.hpp"
 #include "stackbound/units/input_error.hpp"
 
 namespace stackbound::cases {
@@ -296,6 +297,39 @@ LimitSpec limit_spec(const YamlField& limit, const ReportSpec& report) {
   return {pollutant, text, rate};
 }
 
+// `computed`, `published`, {published: KEY} or {Fd: "8710 dscf/MMBtu", Fw: ..., Fc: ...}.
+FFactorSpec f_factor_spec(const YamlField& field) {
+  FFactorSpec spec;
+  if (field.is_scalar()) {
+    spec.choice = field.choice({"computed", "published"}) == "published" ? FFactorChoice::published
+                                                                         : FFactorChoice::computed;
+    return spec;
+  }
+  field.allow_only({"published", "Fd", "Fw", "Fc"});
+  if (const auto key = field.optional("published")) {
+    if (field.has("Fd") || field.has("Fw") || field.has("Fc")) field.fail("give published or Fd/Fw/Fc, not both");
+    spec.choice = FFactorChoice::published;
+    spec.table_key = key->text();
+    if (em::find_published_f_factors(spec.table_key) == nullptr) {
+      std::vector<std::string_view> keys;
+      for (const em::PublishedFFactors& entry : em::published_f_factors()) keys.push_back(entry.key);
+      key->fail(fmt::format("not an entry of Method 19 Table 19-2; accepted: {}", fmt::join(keys, ", ")));
+    }
+    return spec;
+  }
+  spec.choice = FFactorChoice::stated;
+  const auto read = [&](const char* name, em::FFactorKind kind) -> std::optional<em::FFactor> {
+    const auto node = field.optional(name);
+    if (!node) return std::nullopt;
+    return node->located([&] { return em::parse_f_factor(node->text(), kind, node->path()); });
+  };
+  spec.fd = read("Fd", em::FFactorKind::dry);
+  spec.fw = read("Fw", em::FFactorKind::wet);
+  spec.fc = read("Fc", em::FFactorKind::carbon);
+  if (!spec.fd) field.fail("needs Fd (the F-factor Method 19 uses with the flue O2), e.g. {Fd: 8710 dscf/MMBtu}");
+  return spec;
+}
+
 // Reference O2: a stated value, or "preset" (the plant type's preset).
 std::optional<double> reference_o2(const YamlField& ref) {
   if (ref.is_scalar() && ref.text() == "preset") return std::nullopt;
@@ -304,7 +338,9 @@ std::optional<double> reference_o2(const YamlField& ref) {
 
 ReportSpec report_spec(const YamlField& report) {
   ReportSpec spec;
-  report.allow_only({"reference_o2", "o2_basis", "normal_conditions", "pollutants", "operating_hours", "limits"});
+  report.allow_only(
+      {"reference_o2", "o2_basis", "normal_conditions", "pollutants", "operating_hours", "limits", "f_factors"});
+  if (const auto f = report.optional("f_factors")) spec.f_factors = f_factor_spec(*f);
   if (const auto ref = report.optional("reference_o2")) spec.reference_o2_fraction = reference_o2(*ref);
   if (const auto basis = report.optional("o2_basis")) {
     spec.o2_basis = basis->choice({"20.9", "21"}) == "21" ? em::O2Basis::eu_21 : em::O2Basis::us_epa_20_9;

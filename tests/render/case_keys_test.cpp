@@ -240,6 +240,8 @@ const std::vector<KeyCheck>& key_checks() {
       {"report.normal_conditions", kFixed, {{"report.normal_conditions", "20C"}}, ""},
       {"report.pollutants", kFixed, {{"report.pollutants", "[CO, NO, NOx, SO2]"}}, ""},
       {"report.operating_hours", kFixed, {{"report.operating_hours", "4000 h"}}, ""},
+      {"report.f_factors", kFixed, {{"report.f_factors", "published"}}, ""},
+      {"report.f_factors", kFixed, {{"report.f_factors", "{Fd: 8700 dscf/MMBtu}"}}, ""},
       {"report.limits", kFixed, {{"report.limits", "~remove"}}, ""},
       {"report.limits[].pollutant", kFixed, {{"report.limits[0].pollutant", "NO"}}, ""},
       {"report.limits[].limit", kFixed, {{"report.limits[0].limit", "200 mg/Nm3, dry, O2=3%"}}, ""},
