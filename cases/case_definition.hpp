@@ -5,6 +5,7 @@
 // data: the run (pipeline.hpp) takes it as it is and never parses text; sweeps change fields of a copy.
 // Field-by-field documentation: docs/case-file.md.
 
+#include <memory>
 #include <optional>
 #include <string>
 #include <variant>
@@ -162,6 +163,9 @@ struct ReportSpec {
   std::optional<double> reference_o2_fraction;  // nullopt: the plant type's preset
   emissions::O2Basis o2_basis = emissions::O2Basis::us_epa_20_9;  // 20.9 % (US EPA) or 21 % (EU)
   const units::NormalConditions* normal = &units::normal_0C();    // of mg/Nm3 figures and normal volumes
+  // Owns `normal` when the case states its temperature and pressure ("25 degC, 101.325 kPa"); shared,
+  // so copies of the definition (sweep points) keep it.
+  std::shared_ptr<const units::StatedNormalConditions> stated_normal;
   std::vector<emissions::Pollutant> pollutants{emissions::pollutant_by_name("CO", "report.pollutants"),
                                                emissions::pollutant_by_name("NO", "report.pollutants"),
                                                emissions::pollutant_by_name("NOx", "report.pollutants")};

@@ -258,14 +258,29 @@ StackSpec stack_spec(const std::optional<YamlField>& stack, const units::NormalC
   return spec;
 }
 
+// The report's normal conditions: a preset by key, or stated ("25 degC, 101.325 kPa"), then owned by
+// `stated`.
+struct ReportNormal {
+  const units::NormalConditions* conditions = &units::normal_0C();
+  std::shared_ptr<const units::StatedNormalConditions> stated;
+};
+
 // Read before the rest of the report: the measured values in `stack` are on its normal conditions.
-const units::NormalConditions& normal_conditions(const std::optional<YamlField>& report) {
+ReportNormal normal_conditions(const std::optional<YamlField>& report) {
   const auto normal = report ? report->optional("normal_conditions") : std::nullopt;
-  if (!normal) return units::normal_0C();
+  if (!normal) return {};
+  const std::string text = normal->text();
+  if (text.find(',') != std::string::npos) {
+    ReportNormal stated;
+    stated.stated = normal->located([&] { return units::stated_normal_conditions(text, "report.normal_conditions"); });
+    stated.conditions = &stated.stated->conditions();
+    return stated;
+  }
   const std::string key = normal->choice({"0C", "15C", "20C", "60F", "IED"});
-  return normal->located([&]() -> const units::NormalConditions& {
-    return units::normal_conditions_by_key(key, "report.normal_conditions");
-  });
+  return {&normal->located([&]() -> const units::NormalConditions& {
+            return units::normal_conditions_by_key(key, "report.normal_conditions");
+          }),
+          nullptr};
 }
 
 // A concentration unit ("mg/Nm3", "ppm") makes a concentration limit; anything else is a rate.
@@ -336,7 +351,7 @@ std::optional<double> reference_o2(const YamlField& ref) {
   return fraction_in(ref, 0.0, 0.2, "must be 'preset' or an O2 between 0 % and 20 %");
 }
 
-ReportSpec report_spec(const YamlField& report) {
+ReportSpec report_spec(const YamlField& report, const ReportNormal& normal) {
   ReportSpec spec;
   report.allow_only(
       {"reference_o2", "o2_basis", "normal_conditions", "pollutants", "operating_hours", "limits", "f_factors"});
@@ -345,7 +360,8 @@ ReportSpec report_spec(const YamlField& report) {
   if (const auto basis = report.optional("o2_basis")) {
     spec.o2_basis = basis->choice({"20.9", "21"}) == "21" ? em::O2Basis::eu_21 : em::O2Basis::us_epa_20_9;
   }
-  spec.normal = &normal_conditions(report);
+  spec.normal = normal.conditions;
+  spec.stated_normal = normal.stated;
   if (const auto pollutants = report.optional("pollutants")) {
     const std::vector<std::string> names = string_list(*pollutants);
     spec.pollutants.clear();
@@ -429,8 +445,9 @@ LoadedCase parse_case_file(std::string_view text, const std::string& origin) {
   definition.firing = firing_spec(root.required("firing"));
   definition.post_flame = post_flame_spec(root.optional("post_flame"));
   const std::optional<YamlField> report = root.optional("report");
-  definition.stack = stack_spec(root.optional("stack"), normal_conditions(report));
-  if (report) definition.report = report_spec(*report);
+  const ReportNormal normal = normal_conditions(report);
+  definition.stack = stack_spec(root.optional("stack"), *normal.conditions);
+  if (report) definition.report = report_spec(*report, normal);
   check_reference_o2(definition, report);
   definition.warnings = load_warnings(definition, root);
   // A section left out is the file's: errors about its defaults are reported at the file.

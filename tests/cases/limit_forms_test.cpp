@@ -1,5 +1,6 @@
 // Limits and measured values in the forms permits write load into the basis they mean (issue 12):
-// "25 ppmvd @ 3% O2" is the limit "25 ppmvd, O2=3%", "0.1 lb/MMBtu" a rate per heat input.
+// "25 ppmvd @ 3% O2" is the limit "25 ppmvd, O2=3%", "0.1 lb/MMBtu" a rate per heat input; normal
+// conditions may be stated as a temperature and a pressure.
 
 #include <string>
 #include <variant>
@@ -7,6 +8,8 @@
 #include <gtest/gtest.h>
 
 #include "stackbound/cases/case_file.hpp"
+#include "stackbound/cases/pipeline.hpp"
+#include "stackbound/cases/species_file.hpp"
 
 namespace stackbound::cases {
 namespace {
@@ -37,6 +40,20 @@ TEST(LimitForms, PermitFormsLoadAsTheirBasis) {
   const auto* rate_limit = std::get_if<emissions::RateLimit>(&rate.report.limits.at(0).limit);
   ASSERT_NE(rate_limit, nullptr);
   EXPECT_EQ(rate_limit->kind, emissions::RateKind::per_heat_input);
+}
+
+// Wrong if normal conditions stated as "25 degC, 101.325 kPa" were not those of the mg/Nm3 figures:
+// a mass per normal volume scales with 1/V_m = p / (R T), so 25 degC gives 273.15/298.15 of 0 degC's.
+TEST(LimitForms, StatedNormalConditionsAreThoseOfTheMassConcentrations) {
+  const std::string base = case_with_limit("25 ppmvd @ 3% O2");
+  std::string stated = base;
+  stated.replace(stated.find("  reference_o2: 3 %\n"), 19, "  reference_o2: 3 %\n  normal_conditions: 25 degC, 101.325 kPa\n");
+  const RunResult at_0C = run_case(parse_case(base, "l.yaml"), builtin_species());
+  const RunResult at_25C = run_case(parse_case(stated, "l.yaml"), builtin_species());
+  EXPECT_EQ(at_25C.emissions.normal->description, "25 degC, 101.325 kPa (stated)");
+  const double ratio = at_25C.emissions.pollutants.front().emission.mg_per_Nm3_at_reference.result.value() /
+                       at_0C.emissions.pollutants.front().emission.mg_per_Nm3_at_reference.result.value();
+  EXPECT_NEAR(ratio, 273.15 / 298.15, 1e-12);
 }
 
 }  // namespace

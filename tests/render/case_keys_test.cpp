@@ -238,6 +238,7 @@ const std::vector<KeyCheck>& key_checks() {
       {"report.reference_o2", kFixed, {{"report.reference_o2", "6 %"}}, ""},
       {"report.o2_basis", kFixed, {{"report.o2_basis", "\"21\""}}, ""},
       {"report.normal_conditions", kFixed, {{"report.normal_conditions", "20C"}}, ""},
+      {"report.normal_conditions", kFixed, {{"report.normal_conditions", "25 degC, 101.325 kPa"}}, ""},
       {"report.pollutants", kFixed, {{"report.pollutants", "[CO, NO, NOx, SO2]"}}, ""},
       {"report.operating_hours", kFixed, {{"report.operating_hours", "4000 h"}}, ""},
       {"report.f_factors", kFixed, {{"report.f_factors", "published"}}, ""},
