@@ -157,9 +157,8 @@ std::vector<std::string> model_findings(const ScreeningInput& in) {
         stack_K, kDewPointMarginK, *combustion.water_dew_point_K));
   }
   // With published or stated F-factors the two rates differ by the F-factor's own difference.
-  const bool computed_f_factors = in.resolved.f_factors.choice == FFactorChoice::computed;
+  if (in.resolved.f_factors.choice != FFactorChoice::computed) return findings;
   for (const PollutantBound& bound : in.figures.pollutants) {
-    if (!computed_f_factors) break;
     const double m19 = bound.emission.method19.kg_per_J;
     const double direct = bound.emission.direct.kg_per_J;
     if (direct > 0.0 && std::abs(m19 - direct) > 0.02 * direct) {
