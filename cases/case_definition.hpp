@@ -5,19 +5,23 @@
 // data: the run (pipeline.hpp) takes it as it is and never parses text; sweeps change fields of a copy.
 // Field-by-field documentation: docs/case-file.md.
 
+#include <memory>
 #include <optional>
 #include <string>
 #include <variant>
 #include <vector>
 
+#include "stackbound/core/combustion.hpp"
 #include "stackbound/core/fuel.hpp"
 #include "stackbound/emissions/concentration.hpp"
+#include "stackbound/emissions/emission_rate.hpp"
 #include "stackbound/emissions/limit_screening.hpp"
 #include "stackbound/emissions/pollutant.hpp"
 #include "stackbound/emissions/reference_correction.hpp"
 #include "stackbound/emissions/reference_o2_presets.hpp"
 #include "stackbound/units/normal_conditions.hpp"
 #include "stackbound/units/quantity_parser.hpp"
+#include "stackbound/units/warning.hpp"
 
 namespace stackbound::cases {
 
@@ -51,6 +55,8 @@ struct BlendComponent {
 struct FuelFeedSpec {
   FuelSpec fuel;
   units::ParsedQuantity feed_rate;             // mass flow, molar flow (normal volume) or power
+  // The heating value a heat-input feed_rate is on (fuel.heating_value_basis; HHV by default).
+  core::HeatInputBasis heat_input_basis = core::HeatInputBasis::hhv;
   double temperature_K = 298.15;
   // Fraction of the fuel-bound nitrogen leaving as NO (core/fuel_nitrogen.hpp), 0 ... 1; nullopt: the
   // typical band of the fuel's class (post-flame stage).
@@ -142,15 +148,30 @@ struct LimitSpec {
   std::variant<emissions::Concentration, emissions::RateLimit> limit;
 };
 
+// Which F-factors the rates per heat input (Method 19) use: the fuel's own, computed from its
+// composition (default); the published defaults of Method 19 Table 19-2 (emissions/published_f_factors.hpp)
+// for the fuel preset's type or a named table entry; or the case's own.
+enum class FFactorChoice { computed, published, stated };
+
+struct FFactorSpec {
+  FFactorChoice choice = FFactorChoice::computed;
+  std::string table_key;                        // published: the entry; empty: the fuel preset's
+  std::optional<emissions::FFactor> fd, fw, fc;  // stated (Fd required); unstated ones stay computed
+};
+
 struct ReportSpec {
   std::optional<double> reference_o2_fraction;  // nullopt: the plant type's preset
   emissions::O2Basis o2_basis = emissions::O2Basis::us_epa_20_9;  // 20.9 % (US EPA) or 21 % (EU)
   const units::NormalConditions* normal = &units::normal_0C();    // of mg/Nm3 figures and normal volumes
+  // Owns `normal` when the case states its temperature and pressure ("25 degC, 101.325 kPa"); shared,
+  // so copies of the definition (sweep points) keep it.
+  std::shared_ptr<const units::StatedNormalConditions> stated_normal;
   std::vector<emissions::Pollutant> pollutants{emissions::pollutant_by_name("CO", "report.pollutants"),
                                                emissions::pollutant_by_name("NO", "report.pollutants"),
                                                emissions::pollutant_by_name("NOx", "report.pollutants")};
   double operating_hours_h = 8760.0;
   std::vector<LimitSpec> limits;
+  FFactorSpec f_factors;
 };
 
 struct CaseDefinition {
@@ -167,6 +188,9 @@ struct CaseDefinition {
   PostFlameSpec post_flame;
   StackSpec stack;
   ReportSpec report;
+  // Legal but implausible values found at load (a fraction typed as a percent ...); the run adds its
+  // own (run_warnings.hpp) and every output prints them all.
+  std::vector<units::Warning> warnings;
 };
 
 }  // namespace stackbound::cases

@@ -12,6 +12,7 @@
 #include "stackbound/cases/sha256.hpp"
 #include "stackbound/cases/yaml_reader.hpp"
 #include "stackbound/emissions/basis.hpp"
+#include "stackbound/emissions/published_f_factors.hpp"
 #include "stackbound/units/input_error.hpp"
 
 namespace stackbound::cases {
@@ -85,6 +86,18 @@ FuelFeedSpec fuel_feed(const YamlField& fuel) {
   feed.feed_rate = rate.quantity({Dimension::mass_flow, Dimension::molar_flow, Dimension::power});
   if (feed.feed_rate.value_si <= 0.0) rate.fail("must be > 0");
   if (const auto problem = outside(feed.feed_rate.value_si, feed_range(feed.feed_rate.dimension))) rate.fail(*problem);
+  // heating_value_basis states the basis of a heat-input feed (every fuel kind) and of a measured
+  // heating value; with neither it would change nothing, so it is refused.
+  if (const auto basis = fuel.optional("heating_value_basis")) {
+    const bool lower = basis->choice({"HHV", "LHV"}) == "LHV";
+    if (feed.feed_rate.dimension == Dimension::power) {
+      feed.heat_input_basis = lower ? core::HeatInputBasis::lhv : core::HeatInputBasis::hhv;
+    } else if (!heating_value_basis_applies(feed.fuel)) {
+      basis->fail(fmt::format("states the basis of a heat-input fuel.feed_rate (\"12 MW\") or of fuel.heating_value; "
+                              "this case has neither (feed_rate \"{}\" is not a heat input)",
+                              rate.text()));
+    }
+  }
   if (const auto t = fuel.optional("temperature")) feed.temperature_K = temperature_K(*t);
   if (const auto f = fuel.optional("nitrogen_conversion")) {
     feed.nitrogen_conversion = fraction_in(*f, 0.0, 1.0, "must be between 0 % and 100 % of the fuel-bound nitrogen");
@@ -103,6 +116,12 @@ AirSpec air_spec(const std::optional<YamlField>& air) {
   }
   if (const auto rh = air->optional("relative_humidity")) {
     spec.relative_humidity = fraction_in(*rh, 0.0, 1.0, "must be between 0 % and 100 %");
+  }
+  // The ambient state is that of the relative humidity; without one it would change nothing.
+  for (const char* key : {"ambient_temperature", "ambient_pressure"}) {
+    if (const auto node = air->optional(key); node && !spec.relative_humidity) {
+      node->fail("applies only with air.relative_humidity (the ambient state at which it is stated)");
+    }
   }
   if (const auto t = air->optional("ambient_temperature")) spec.ambient_temperature_K = temperature_K(*t);
   if (const auto p = air->optional("ambient_pressure")) spec.ambient_pressure_Pa = pressure_Pa(*p, kAmbientPressure);
@@ -240,14 +259,29 @@ StackSpec stack_spec(const std::optional<YamlField>& stack, const units::NormalC
   return spec;
 }
 
+// The report's normal conditions: a preset by key, or stated ("25 degC, 101.325 kPa"), then owned by
+// `stated`.
+struct ReportNormal {
+  const units::NormalConditions* conditions = &units::normal_0C();
+  std::shared_ptr<const units::StatedNormalConditions> stated;
+};
+
 // Read before the rest of the report: the measured values in `stack` are on its normal conditions.
-const units::NormalConditions& normal_conditions(const std::optional<YamlField>& report) {
+ReportNormal normal_conditions(const std::optional<YamlField>& report) {
   const auto normal = report ? report->optional("normal_conditions") : std::nullopt;
-  if (!normal) return units::normal_0C();
+  if (!normal) return {};
+  const std::string text = normal->text();
+  if (text.find(',') != std::string::npos) {
+    ReportNormal stated;
+    stated.stated = normal->located([&] { return units::stated_normal_conditions(text, "report.normal_conditions"); });
+    stated.conditions = &stated.stated->conditions();
+    return stated;
+  }
   const std::string key = normal->choice({"0C", "15C", "20C", "60F", "IED"});
-  return normal->located([&]() -> const units::NormalConditions& {
-    return units::normal_conditions_by_key(key, "report.normal_conditions");
-  });
+  return {&normal->located([&]() -> const units::NormalConditions& {
+            return units::normal_conditions_by_key(key, "report.normal_conditions");
+          }),
+          nullptr};
 }
 
 // A concentration unit ("mg/Nm3", "ppm") makes a concentration limit; anything else is a rate.
@@ -265,10 +299,10 @@ LimitSpec limit_spec(const YamlField& limit, const ReportSpec& report) {
   }
   const std::string text = value.text();
   const std::string rest = value.located([&] { return em::split_stated_value(text, value.path()).rest; });
-  const std::string unit = rest.substr(0, rest.find(','));
-  const auto first = unit.find_first_not_of(" \t");
-  const auto last = unit.find_last_not_of(" \t");
-  if (first != std::string::npos && em::find_concentration_unit(unit.substr(first, last - first + 1))) {
+  // The unit is the first word: "mg/Nm3, dry, O2=3%", "ppmvd @ 3% O2".
+  const auto first = rest.find_first_not_of(" \t");
+  const std::string unit = first == std::string::npos ? "" : rest.substr(first, rest.find_first_of(", \t@", first) - first);
+  if (!unit.empty() && em::find_concentration_unit(unit)) {
     return {pollutant, text, stated_concentration(value, *reported, *report.normal)};
   }
   const em::RateLimit rate = value.located([&] { return em::parse_rate_limit(text, value.path()); });
@@ -279,20 +313,56 @@ LimitSpec limit_spec(const YamlField& limit, const ReportSpec& report) {
   return {pollutant, text, rate};
 }
 
+// `computed`, `published`, {published: KEY} or {Fd: "8710 dscf/MMBtu", Fw: ..., Fc: ...}.
+FFactorSpec f_factor_spec(const YamlField& field) {
+  FFactorSpec spec;
+  if (field.is_scalar()) {
+    spec.choice = field.choice({"computed", "published"}) == "published" ? FFactorChoice::published
+                                                                         : FFactorChoice::computed;
+    return spec;
+  }
+  field.allow_only({"published", "Fd", "Fw", "Fc"});
+  if (const auto key = field.optional("published")) {
+    if (field.has("Fd") || field.has("Fw") || field.has("Fc")) field.fail("give published or Fd/Fw/Fc, not both");
+    spec.choice = FFactorChoice::published;
+    spec.table_key = key->text();
+    if (em::find_published_f_factors(spec.table_key) == nullptr) {
+      std::vector<std::string_view> keys;
+      for (const em::PublishedFFactors& entry : em::published_f_factors()) keys.push_back(entry.key);
+      key->fail(fmt::format("not an entry of Method 19 Table 19-2; accepted: {}", fmt::join(keys, ", ")));
+    }
+    return spec;
+  }
+  spec.choice = FFactorChoice::stated;
+  const auto read = [&](const char* name, em::FFactorKind kind) -> std::optional<em::FFactor> {
+    const auto node = field.optional(name);
+    if (!node) return std::nullopt;
+    return node->located([&] { return em::parse_f_factor(node->text(), kind, node->path()); });
+  };
+  spec.fd = read("Fd", em::FFactorKind::dry);
+  spec.fw = read("Fw", em::FFactorKind::wet);
+  spec.fc = read("Fc", em::FFactorKind::carbon);
+  if (!spec.fd) field.fail("needs Fd (the F-factor Method 19 uses with the flue O2), e.g. {Fd: 8710 dscf/MMBtu}");
+  return spec;
+}
+
 // Reference O2: a stated value, or "preset" (the plant type's preset).
 std::optional<double> reference_o2(const YamlField& ref) {
   if (ref.is_scalar() && ref.text() == "preset") return std::nullopt;
   return fraction_in(ref, 0.0, 0.2, "must be 'preset' or an O2 between 0 % and 20 %");
 }
 
-ReportSpec report_spec(const YamlField& report) {
+ReportSpec report_spec(const YamlField& report, const ReportNormal& normal) {
   ReportSpec spec;
-  report.allow_only({"reference_o2", "o2_basis", "normal_conditions", "pollutants", "operating_hours", "limits"});
+  report.allow_only(
+      {"reference_o2", "o2_basis", "normal_conditions", "pollutants", "operating_hours", "limits", "f_factors"});
+  if (const auto f = report.optional("f_factors")) spec.f_factors = f_factor_spec(*f);
   if (const auto ref = report.optional("reference_o2")) spec.reference_o2_fraction = reference_o2(*ref);
   if (const auto basis = report.optional("o2_basis")) {
     spec.o2_basis = basis->choice({"20.9", "21"}) == "21" ? em::O2Basis::eu_21 : em::O2Basis::us_epa_20_9;
   }
-  spec.normal = &normal_conditions(report);
+  spec.normal = normal.conditions;
+  spec.stated_normal = normal.stated;
   if (const auto pollutants = report.optional("pollutants")) {
     const std::vector<std::string> names = string_list(*pollutants);
     spec.pollutants.clear();
@@ -314,6 +384,39 @@ ReportSpec report_spec(const YamlField& report) {
   return spec;
 }
 
+// An O2 between 0 and kLowO2Percent percent as written is more likely a fraction typed as a percent
+// ("0.03 %" for 3 %) than a flue gas (common practice, no source: lean firing reads 1 % and more).
+constexpr double kLowO2Percent = 0.21;
+
+void warn_low_o2(const std::string& field, const std::string& text, double fraction, std::vector<units::Warning>& warnings) {
+  const double percent = fraction * 100.0;
+  if (!(percent > 0.0 && percent < kLowO2Percent)) return;
+  warnings.push_back({field, text, fmt::format("below {} % O2, near-stoichiometric firing; if {:g} is a fraction, write "
+                                               "\"{:g} %\"; used as {:g} % O2",
+                                               kLowO2Percent, percent, percent * 100.0, percent)});
+}
+
+// Values that load but look wrong: each becomes a warning naming the field and the value.
+std::vector<units::Warning> load_warnings(const CaseDefinition& definition, const YamlField& root) {
+  std::vector<units::Warning> warnings;
+  if (definition.operating.mode == OperatingMode::flue_o2) {
+    warn_low_o2("operating_point.flue_o2", root.required("operating_point").required("flue_o2").text(),
+                definition.operating.value, warnings);
+  }
+  if (const auto& o2 = definition.stack.measured.o2; o2 && !o2->value.basis().unit.is_mass()) {
+    warn_low_o2("stack.measured.o2", o2->text, o2->value.value() * o2->value.basis().unit.factor, warnings);
+  }
+  const FiringSpec& firing = definition.firing;
+  if (!firing.adiabatic && firing.temperature_K < definition.stack.temperature_K) {
+    warnings.push_back({"firing.temperature", root.required("firing").required("temperature").text(),
+                        fmt::format("{:.2f} K is below the stack temperature ({:.2f} K{}): a flame or furnace is "
+                                    "hotter than its stack; check the value and its unit",
+                                    firing.temperature_K, definition.stack.temperature_K,
+                                    definition.stack.temperature_stated ? "" : ", the default 150 degC")});
+  }
+  return warnings;
+}
+
 // "preset" (stated, or the default) needs a plant type with a reference-O2 preset.
 void check_reference_o2(const CaseDefinition& definition, const std::optional<YamlField>& report) {
   if (definition.reference_o2_preset != nullptr || definition.report.reference_o2_fraction) return;
@@ -327,7 +430,6 @@ void read_case(const YamlField& root, const std::string& origin, LoadedCase& loa
   root.allow_only({"case", "fuel", "air", "operating_point", "firing", "post_flame", "stack", "report"});
   CaseDefinition& definition = loaded.definition;
   definition.origin = origin;
-  definition.source_sha256 = sha256_hex(text);
   const YamlField info = root.required("case");
   info.allow_only({"title", "description", "plant_type"});
   definition.title = info.required("title").text();
@@ -343,9 +445,11 @@ void read_case(const YamlField& root, const std::string& origin, LoadedCase& loa
   definition.firing = firing_spec(root.required("firing"));
   definition.post_flame = post_flame_spec(root.optional("post_flame"));
   const std::optional<YamlField> report = root.optional("report");
-  definition.stack = stack_spec(root.optional("stack"), normal_conditions(report));
-  if (report) definition.report = report_spec(*report);
+  const ReportNormal normal = normal_conditions(report);
+  definition.stack = stack_spec(root.optional("stack"), *normal.conditions);
+  if (report) definition.report = report_spec(*report, normal);
   check_reference_o2(definition, report);
+  definition.warnings = load_warnings(definition, root);
   // A section left out is the file's: errors about its defaults are reported at the file.
   for (const std::string_view section : kSections) {
     if (!loaded.sources.location_of(section)) loaded.sources.add(std::string(section), origin);
@@ -357,6 +461,7 @@ void read_case(const YamlField& root, const std::string& origin, LoadedCase& loa
 LoadedCase parse_case_file(std::string_view text, const std::string& origin) {
   LoadedCase loaded{CaseDefinition{}, SourceMap(origin)};
   read_case(YamlField::load(text, origin, &loaded.sources), origin, loaded);
+  loaded.definition.source_sha256 = sha256_hex(text);
   return loaded;
 }
 
@@ -368,6 +473,7 @@ LoadedCase read_case_document(const YAML::Node& document, const std::string& ori
   }
   LoadedCase loaded{CaseDefinition{}, SourceMap::for_document(origin)};
   read_case(YamlField(document, origin, "", &loaded.sources), origin, loaded);
+  loaded.definition.source_sha256 = sha256_hex(YAML::Dump(document));  // of the case as YAML text
   return loaded;
 }
 

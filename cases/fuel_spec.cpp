@@ -148,7 +148,25 @@ std::vector<BlendComponent> blend_components(const YamlField& list) {
   return parts;
 }
 
+// Keys that describe one kind of fuel are refused with another: they would change nothing.
+void refuse_keys_of_other_kind(const YamlField& fuel, const std::string& kind) {
+  const std::pair<const char*, const char*> owned[] = {
+      {"gas_basis", "gas"},           {"ultimate_basis", "ultimate"}, {"state", "ultimate"},
+      {"heating_value", "ultimate"},  {"heating_value_correlation", "ultimate"},
+      {"specific_heat", "ultimate"},  {"blend_by", "blend"}};
+  for (const auto& [key, owner] : owned) {
+    if (kind == owner) continue;
+    if (const auto node = fuel.optional(key)) {
+      node->fail(fmt::format("applies only with {}.{}, not with {}.{}", fuel.path(), owner, fuel.path(), kind));
+    }
+  }
+}
+
 }  // namespace
+
+bool heating_value_basis_applies(const FuelSpec& spec) {
+  return spec.kind == FuelKind::ultimate && spec.condensed.heating_value.has_value();
+}
 
 FuelSpec read_fuel_spec(const YamlField& fuel, bool blend_part) {
   if (blend_part) {
@@ -186,8 +204,16 @@ FuelSpec read_fuel_spec(const YamlField& fuel, bool blend_part) {
                                          : core::BlendBasis::mass;
     }
   }
+  refuse_keys_of_other_kind(fuel, kind);
   const auto measured = heating_value(fuel, spec.condensed.analysis.basis);
   if (spec.kind == FuelKind::ultimate) spec.condensed.heating_value = measured;
+  // A blend part's heating_value_basis can only be that of its heating_value (a heat-input feed is
+  // the whole fuel's: fuel.heating_value_basis, checked with the feed in case_file.cpp).
+  if (const auto basis = fuel.optional("heating_value_basis"); basis && blend_part && !heating_value_basis_applies(spec)) {
+    basis->fail(fmt::format("states the basis of {}.heating_value, which this part does not have (the basis of a "
+                            "heat-input feed_rate is fuel.heating_value_basis)",
+                            fuel.path()));
+  }
   return spec;
 }
 

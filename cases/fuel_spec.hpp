@@ -13,6 +13,10 @@ namespace stackbound::cases {
 // Reads a fuel mapping. `blend_part`: a component of a blend (takes `fraction`, no `blend`, no feed
 // keys); otherwise the top-level fuel, which also allows `feed_rate` and `temperature` (read by the
 // caller). Throws units::InputError with file, line and column.
+// True when the fuel's heating_value_basis states the basis of its measured heating value (an
+// ultimate analysis with a heating_value).
+bool heating_value_basis_applies(const FuelSpec& spec);
+
 FuelSpec read_fuel_spec(const YamlField& fuel, bool blend_part);
 
 // Builds the fuel. What the species data refuse (an unknown species or preset, percentages that do

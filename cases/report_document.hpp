@@ -52,6 +52,7 @@ struct Report {
   std::vector<ReportTable> tables;
   std::vector<ReportPlot> plots;                            // drawn in HTML only
   std::vector<std::string> flags;                           // findings that need the reader's attention
+  std::vector<std::string> warnings;                        // legal but implausible input: field = "value": why
   std::vector<std::string> assumptions;
   std::vector<std::string> cautions;
 };

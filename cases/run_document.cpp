@@ -65,6 +65,10 @@ std::vector<std::pair<std::string, std::string>> summary(const RunResult& r) {
       {"Fuel feed", fmt::format("{} = {:.5g} kg/h; heat input {:.5g} MW (HHV), {:.5g} MMBtu/h", feed.given,
                                 feed.mass_flow_kg_per_s * kSecondsPerHour, feed.heat_input_hhv_W / 1e6,
                                 feed.heat_input_hhv_W * kSecondsPerHour / (units::kBtuIT_J * 1e6))},
+      {"F-factors (Method 19)", fmt::format("Fd {:.0f} dscf/MMBtu, Fw {:.0f} wscf/MMBtu, Fc {:.0f} scf/MMBtu; {}",
+                                            r.resolved.f_factors.fd.scf_per_MMBtu(),
+                                            r.resolved.f_factors.fw.scf_per_MMBtu(),
+                                            r.resolved.f_factors.fc.scf_per_MMBtu(), r.resolved.f_factors.source)},
       {"Oxidant", r.resolved.oxidant.description()},
       {"Operating point", operating_point_text(r)},
       {"Firing conditions", firing_text(r)},
@@ -102,7 +106,7 @@ ReportTable bounds_table(const RunResult& r) {
       fmt::format("mg/Nm3 at {}, dry. t/yr for {:.0f} operating hours. lb/MMBtu and g/GJ on HHV by US EPA Method 19 "
                   "(Fd = {:.0f} dscf/MMBtu, O2-based).",
                   r.emissions.normal->description, r.definition.report.operating_hours_h,
-                  r.resolved.combustion.f_factors.fd_dscf_per_MMBtu()),
+                  r.resolved.f_factors.fd.scf_per_MMBtu()),
       "NOx is the sum of NO and NO2 expressed as NO2. Equilibrium NO is a bound: NO forms slowly, and plants "
       "usually emit far less than the equilibrium value at the flame temperature."};
   return bounds;
@@ -252,7 +256,7 @@ ReportTable flue_table(const RunResult& r) {
                          fmt::format("{:.4g}", eq * 100.0)});
   }
   flue.notes = {fmt::format(
-      "Stoichiometric air {:.4g} kg/kg fuel; actual oxidant {:.4g} kg/kg; water dew point {}; F-factors Fd {:.0f} "
+      "Stoichiometric air {:.4g} kg/kg fuel; actual oxidant {:.4g} kg/kg; water dew point {}; the fuel's F-factors Fd {:.0f} "
       "dscf/MMBtu, Fw {:.0f} wscf/MMBtu, Fc {:.0f} scf/MMBtu (20 degC, 101.325 kPa).",
       combustion.stoichiometric_air_kg_per_kg, combustion.oxidant_kg_per_kg,
       combustion.water_dew_point_K ? fmt::format("{:.1f} K", *combustion.water_dew_point_K) : std::string("none"),
@@ -336,7 +340,7 @@ Report run_document(const RunResult& r, const Provenance& provenance) {
   report.tables.push_back(flue_table(r));
   report.tables.push_back(species_table(r.fired));
   report.flags = r.screening.findings;
-  for (const std::string& warning : r.screening.warnings) report.flags.push_back("Note: " + warning);
+  for (const units::Warning& warning : r.screening.warnings) report.warnings.push_back(units::warning_text(warning));
   report.assumptions = r.screening.assumptions;
   report.cautions = r.screening.cautions;
   return report;

@@ -40,7 +40,7 @@ em::StackEmission emission_at(const em::Pollutant& pollutant, double wet_fractio
                               const ResolvedCase& resolved, const StackGas& stack, double reference_o2,
                               bool record_factors) {
   const em::O2Basis o2_basis = definition.report.o2_basis;
-  const em::FFactor fd = em::FFactor::from_scm_per_J(em::FFactorKind::dry, resolved.combustion.f_factors.fd_m3_per_J);
+  const em::FFactor fd = resolved.f_factors.fd;
   const em::StackEmissionInput input{
       .pollutant = pollutant,
       .pollutant_wet_fraction = wet_fraction,

@@ -52,11 +52,15 @@ ResolvedCase resolve_stage(const CaseDefinition& definition, const core::Species
   core::OperatingPoint op = at_field(operating, [&] { return build_operating_point(definition); });
   core::CombustionResult combustion = at_field(operating, [&] { return core::burn(fuel, oxidant, op, database); });
   const core::FuelFeed feed = at_field("fuel.feed_rate", [&] {
-    return core::resolve_feed(fuel, definition.fuel.feed_rate, core::HeatInputBasis::hhv, "fuel.feed_rate");
+    return core::resolve_feed(fuel, definition.fuel.feed_rate, definition.fuel.heat_input_basis, "fuel.feed_rate");
   });
   core::CombustionRates rates = core::rates(combustion, feed);
+  FFactorsUsed f_factors = at_field("report.f_factors", [&] {
+    return choose_f_factors(definition.report.f_factors, definition.fuel.fuel, combustion.f_factors);
+  });
   // Moved into the result: the locals above are not const for that reason only.
-  return {std::move(fuel), std::move(oxidant), std::move(op), std::move(combustion), std::move(rates)};
+  return {std::move(fuel),       std::move(oxidant), std::move(op), std::move(combustion),
+          std::move(rates),      std::move(f_factors)};
 }
 
 }  // namespace stackbound::cases

@@ -4,6 +4,7 @@
 // fire stage, F-factors, dew point) and scaled to the feed.
 
 #include "stackbound/cases/case_definition.hpp"
+#include "stackbound/cases/f_factor_choice.hpp"
 #include "stackbound/core/combustion.hpp"
 #include "stackbound/core/fuel.hpp"
 #include "stackbound/core/oxidant.hpp"
@@ -17,6 +18,7 @@ struct ResolvedCase {
   core::OperatingPoint operating_point;  // with the fuel temperature and the flue (stack) pressure
   core::CombustionResult combustion;     // per kg of fuel, complete combustion
   core::CombustionRates rates;           // scaled to the feed (rates.feed: mass flow, heat input)
+  FFactorsUsed f_factors;                // those the rates per heat input use (report.f_factors)
 };
 
 // Runs the stage. `built_fuel`: the fuel of definition.fuel.fuel when already built (a sweep that

@@ -6,6 +6,7 @@
 #include <cctype>
 #include <cmath>
 
+#include "stackbound/cases/run_warnings.hpp"
 #include "stackbound/cases/source_map.hpp"
 #include "stackbound/emissions/basis.hpp"
 #include "stackbound/emissions/cautions.hpp"
@@ -47,11 +48,13 @@ em::ScreeningResult screen_figure(const LimitSpec& limit, const em::StackEmissio
 // The stack context of measured values: the model's, with the measured O2 (dry) when one is stated.
 em::ConcentrationContext measured_context_of(const ScreeningInput& in) {
   em::ConcentrationContext context = in.stack.context;
-  if (const std::optional<MeasuredValue>& o2 = in.definition.stack.measured.o2) {
+  const MeasuredSpec& measured = in.definition.stack.measured;
+  if (measured.moisture) context.moisture_fraction = measured.moisture->fraction;  // a stated moisture governs
+  if (const std::optional<MeasuredValue>& o2 = measured.o2) {
     const em::Basis dry_fraction =
         em::make_basis(em::mole_unit("%"), em::Moisture::dry, em::DiluentReference::as_measured());
     context.o2_dry_fraction =
-        at_field("stack.measured.o2", [&] { return o2->value.to(dry_fraction, in.stack.context).value(); }) / 100.0;
+        at_field("stack.measured.o2", [&] { return o2->value.to(dry_fraction, context).value(); }) / 100.0;
   }
   return context;
 }
@@ -305,6 +308,8 @@ std::vector<std::string> model_findings(const ScreeningInput& in) {
         "in the stack, and the acid dew point lies higher still.",
         stack_K, kDewPointMarginK, *combustion.water_dew_point_K));
   }
+  // With published or stated F-factors the two rates differ by the F-factor's own difference.
+  if (in.resolved.f_factors.choice != FFactorChoice::computed) return findings;
   for (const PollutantBound& bound : in.figures.pollutants) {
     const double m19 = bound.emission.method19.kg_per_J;
     const double direct = bound.emission.direct.kg_per_J;
@@ -320,13 +325,33 @@ std::vector<std::string> model_findings(const ScreeningInput& in) {
   return findings;
 }
 
-// The combustion step's warnings, then the fuel's not already among them.
-std::vector<std::string> warnings_of(const ResolvedCase& resolved) {
-  std::vector<std::string> warnings = resolved.combustion.warnings;
-  for (const std::string& warning : resolved.fuel.warnings()) {
-    if (std::find(warnings.begin(), warnings.end(), warning) == warnings.end()) warnings.push_back(warning);
+// A wet measured value with no measured moisture is made dry with the model's moisture; a limit with
+// no reference O2 is screened at the run's flue O2, not at a permit's reference level.
+void add_screening_warnings(const ScreeningInput& in, std::vector<units::Warning>& warnings) {
+  const MeasuredSpec& measured = in.definition.stack.measured;
+  if (!measured.moisture) {
+    const std::pair<const char*, const std::optional<MeasuredValue>*> values[] = {
+        {"stack.measured.o2", &measured.o2}, {"stack.measured.co", &measured.co},
+        {"stack.measured.no", &measured.no}, {"stack.measured.nox", &measured.nox}};
+    for (const auto& [field, value] : values) {
+      if (!*value || (*value)->value.basis().moisture != em::Moisture::wet) continue;
+      add_warning(warnings, {field, (*value)->text,
+                             fmt::format("a wet value and no stack.measured.moisture: made dry with the model's "
+                                         "moisture ({:.2f} % H2O); state the measured moisture to use it instead",
+                                         in.stack.h2o_wet * 100.0)});
+    }
   }
-  return warnings;
+  const std::vector<LimitSpec>& limits = in.definition.report.limits;
+  for (std::size_t i = 0; i < limits.size(); ++i) {
+    const auto* concentration = std::get_if<em::Concentration>(&limits[i].limit);
+    if (concentration == nullptr || concentration->basis().reference.kind() != em::DiluentReference::Kind::as_measured) {
+      continue;
+    }
+    add_warning(warnings, {fmt::format("report.limits[{}].limit", i), limits[i].text,
+                           fmt::format("no reference O2 stated: screened at the flue O2 of this run ({:.2f} %, dry), "
+                                       "not at a permit's reference level; write the permit's, e.g. \"{}, O2=3%\"",
+                                       in.stack.o2_dry * 100.0, limits[i].text)});
+  }
 }
 
 std::vector<std::string> assumptions_of(const ScreeningInput& in, const core::SpeciesDatabase& database) {
@@ -388,7 +413,8 @@ Screening screening_stage(const ScreeningInput& in, const core::SpeciesDatabase&
     if (!row.finding.empty()) screening.findings.push_back(row.finding);
   }
   for (std::string& finding : model_findings(in)) screening.findings.push_back(std::move(finding));
-  screening.warnings = warnings_of(in.resolved);
+  screening.warnings = run_warnings(in.definition, in.resolved);
+  add_screening_warnings(in, screening.warnings);
   screening.assumptions = assumptions_of(in, database);
   add_cautions(in, screening);
   return screening;

@@ -17,6 +17,7 @@
 #include "stackbound/core/species_database.hpp"
 #include "stackbound/emissions/limit_screening.hpp"
 #include "stackbound/emissions/screening_reading.hpp"
+#include "stackbound/units/warning.hpp"
 
 namespace stackbound::cases {
 
@@ -63,7 +64,9 @@ struct Screening {
   std::vector<LimitScreening> limits;
   std::vector<MeasuredComparison> measured;
   std::vector<std::string> findings;  // what the reader must look at
-  std::vector<std::string> warnings;  // notes from the fuel and combustion steps
+  // Legal but implausible input, and what the run filled in: run_warnings() plus the screening's own
+  // (a wet measured value converted with the model's moisture, a limit with no reference O2).
+  std::vector<units::Warning> warnings;
   std::vector<std::string> assumptions;
   std::vector<std::string> cautions;  // texts, in print order
   std::vector<std::string> caution_keys;

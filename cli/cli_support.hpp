@@ -10,8 +10,10 @@
 
 #include <CLI/CLI.hpp>
 
+#include "stackbound/cases/source_map.hpp"
 #include "stackbound/cli/output_file.hpp"
 #include "stackbound/core/species_database.hpp"
+#include "stackbound/units/warning.hpp"
 
 namespace stackbound::cli {
 
@@ -29,5 +31,9 @@ class PartialFailure : public std::runtime_error {
 
 // Registers `--format` with the accepted values and the default; the help text lists them.
 CLI::Option* add_format_option(CLI::App& command, std::string& format, const std::vector<std::string>& accepted);
+
+// Prints each warning on stderr as 'stackbound: warning: FILE:LINE:COLUMN: field = "value": message',
+// at the field's position in `sources` (else the file's name).
+void print_warnings(const std::vector<units::Warning>& warnings, const cases::SourceMap& sources);
 
 }  // namespace stackbound::cli

@@ -40,10 +40,11 @@ void add_compare_command(CLI::App& app, const GlobalOptions& global) {
     const core::SpeciesDatabase database = species_database(global.species_file);
     const Comparison comparison = compare(cli->case_files, database);
     const Provenance provenance = make_provenance(comparison.runs.front().definition, std::chrono::system_clock::now());
-    write_output(cli->output,
-                 cli->format == "json"
-                     ? render::json_text(render::comparison_json(comparison, provenance))
-                     : render::render_report(cases::comparison_document(comparison, provenance), cli->format));
+    const std::string text =
+        cli->format == "json" ? render::json_text(render::comparison_json(comparison, provenance))
+                              : render::render_report(cases::comparison_document(comparison, provenance), cli->format);
+    for (const RunResult& run : comparison.runs) print_warnings(run.screening.warnings, SourceMap(run.definition.origin));
+    write_output(cli->output, text);
   });
 }
 

@@ -269,7 +269,7 @@ std::string text_report(const FuelAnswer& answer) {
 
   if (!r.warnings.empty()) {
     t += "\nWarnings\n";
-    for (const std::string& w : r.warnings) t += fmt::format("  - {}\n", w);
+    for (const units::Warning& w : r.warnings) t += fmt::format("  - {}\n", units::warning_text(w));
   }
   t += fmt::format("\n{}\n", kFuelCaution);
   return t;

@@ -39,7 +39,9 @@ void add_run_command(CLI::App& app, const GlobalOptions& global) {
     const RunResult result =
         with_positions(loaded.sources, [&] { return run_case(std::move(loaded.definition), database); });
     const Provenance provenance = make_provenance(result.definition, std::chrono::system_clock::now());
-    write_output(options->output, render::render_run(result, options->format, provenance));
+    const std::string text = render::render_run(result, options->format, provenance);
+    print_warnings(result.screening.warnings, loaded.sources);
+    write_output(options->output, text);
   });
 }
 

@@ -3,6 +3,7 @@
 #include <fmt/format.h>
 
 #include "stackbound/cases/case_file.hpp"
+#include "stackbound/cases/run_warnings.hpp"
 #include "stackbound/cases/sweep.hpp"
 #include "stackbound/cli/commands.hpp"
 #include "stackbound/cli/progress_bar.hpp"
@@ -48,16 +49,24 @@ void run(const SweepCli& cli, const GlobalOptions& global) {
   const Provenance provenance = make_provenance(definition, std::chrono::system_clock::now());
   OutputStream out(cli.output);
   std::size_t failed = 0;
+  // The first point that ran gives the warnings of the case (those of the load, fuel and combustion).
+  std::optional<std::vector<units::Warning>> warnings;
+  const auto note_warnings = [&](const SweepPoint& p) {
+    if (!warnings && p.result) warnings = run_warnings(p.result->definition, p.result->resolved);
+  };
   if (cli.format == "csv") {
     render::SweepCsvWriter writer([&out](std::string_view text) { out.write(text); }, vary,
                                   sweep_cautions(definition, vary), provenance);
-    failed = run_sweep(definition, vary, database, [&](const SweepPoint& p) { writer.add(p); }, options);
+    failed = run_sweep(
+        definition, vary, database, [&](const SweepPoint& p) { note_warnings(p); writer.add(p); }, options);
     writer.finish();
   } else {
     render::SweepHtmlCollector collector(vary);
-    failed = run_sweep(definition, vary, database, [&](const SweepPoint& p) { collector.add(p); }, options);
+    failed = run_sweep(
+        definition, vary, database, [&](const SweepPoint& p) { note_warnings(p); collector.add(p); }, options);
     out.write(render::render_report(collector.document(definition, provenance), "html"));
   }
+  print_warnings(warnings.value_or(definition.warnings), loaded.sources);
   out.commit();
   if (failed > 0) {
     throw PartialFailure(fmt::format("{} of {} sweep points failed; each failed row names its parameters and the reason",

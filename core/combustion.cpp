@@ -304,10 +304,9 @@ CombustionResult burn(const Fuel& fuel, const Oxidant& oxidant, const OperatingP
   r.oxidant_enthalpy_J_per_kg = r.oxidant_mol_per_kg * oxidant.enthalpy_J_per_mol(database);
   r.reactant_enthalpy_J_per_kg = r.fuel_enthalpy_J_per_kg + r.oxidant_enthalpy_J_per_kg;
   if (!fuel.sensible_heat_known() && std::abs(T_fuel - units::kReferenceTemperature_K) > 0.5) {
-    r.warnings.push_back(fmt::format(
-        "{} = {:.2f} K: no specific heat was given for the liquid/solid fuel, so its sensible heat above 298.15 K "
-        "is left out of the reactant enthalpy",
-        op.fuel_temperature_field, T_fuel));
+    r.warnings.push_back({op.fuel_temperature_field, fmt::format("{:.2f} K", T_fuel),
+                          "no specific heat was given for the liquid/solid fuel, so its sensible heat above 298.15 K "
+                          "is left out of the reactant enthalpy"});
   }
 
   // Products.
@@ -327,10 +326,10 @@ CombustionResult burn(const Fuel& fuel, const Oxidant& oxidant, const OperatingP
       throw units::InputError(fmt::format("water-gas shift temperature = {:.6g} K: must be between 300 K and 3000 K",
                                           T_shift));
     }
-    r.warnings.push_back(fmt::format(
-        "sub-stoichiometric (lambda = {:.4g}): CO and H2 are split by the water-gas-shift equilibrium at {:.0f} K, a "
+    r.warnings.push_back({op.field, fmt::format("lambda = {:.4g}", r.air_ratio), fmt::format(
+        "sub-stoichiometric: CO and H2 are split by the water-gas-shift equilibrium at {:.0f} K, a "
         "convention of this complete-combustion estimate; the equilibrium calculation gives the actual composition",
-        r.air_ratio, T_shift));
+        T_shift)});
   }
   r.flue = products(e, r.shift_temperature_K, database);
   r.flue_o2_dry = r.flue.mole_fraction(FlueSpecies::O2, GasBasis::dry);

@@ -149,7 +149,7 @@ struct CombustionResult {
   double shift_temperature_K = kDefaultShiftTemperature_K;  // used only when air_ratio < 1
 
   FFactors f_factors;
-  std::vector<std::string> warnings;  // the fuel's, plus those of this calculation
+  std::vector<units::Warning> warnings;  // the fuel's, plus those of this calculation
 
   // The temperatures and the pressure as quantities (the raw fields feed the renderers unchanged).
   [[nodiscard]] units::Temperature fuel_temperature() const { return units::kelvin(fuel_temperature_K); }

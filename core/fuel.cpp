@@ -72,7 +72,7 @@ void require_percent(double value, const std::string& field) {
 // Checks that `sum` (percent) is 100 within kSumTolerance_percent; returns the factor that
 // normalises it, adding a warning when the correction exceeds rounding.
 double normalising_factor(double sum, const std::string& field, std::string_view what,
-                          std::vector<std::string>& warnings) {
+                          std::vector<units::Warning>& warnings) {
   if (!(sum > 0.0)) throw units::InputError(fmt::format("{}: the {} sum to 0 %; give percentages adding up to 100 %", field, what));
   const double difference = sum - 100.0;
   if (std::abs(difference) > kSumTolerance_percent) {
@@ -82,7 +82,7 @@ double normalising_factor(double sum, const std::string& field, std::string_view
                                         field, what, sum, kSumTolerance_percent, hint));
   }
   if (std::abs(difference) > 0.01) {
-    warnings.push_back(fmt::format("{}: the {} sum to {:.4g} %; normalised to 100 %", field, what, sum));
+    warnings.push_back({field, fmt::format("{:.4g} %", sum), fmt::format("the {} sum to {:.4g} %; normalised to 100 %", what, sum)});
   }
   return 100.0 / sum;
 }
@@ -212,7 +212,7 @@ struct AsReceived {
   }
 };
 
-AsReceived as_received(const UltimateAnalysis& a, const std::string& field, std::vector<std::string>& warnings) {
+AsReceived as_received(const UltimateAnalysis& a, const std::string& field, std::vector<units::Warning>& warnings) {
   const std::string f = field + ".ultimate";
   require_percent(a.carbon_percent, f + ".C");
   require_percent(a.hydrogen_percent, f + ".H");
@@ -300,7 +300,7 @@ double correlation_MJ_per_kg(const UltimateAnalysis& dry, HeatingValueCorrelatio
 }  // namespace
 
 double estimate_hhv_dry_J_per_kg(const UltimateAnalysis& analysis, HeatingValueCorrelation correlation) {
-  std::vector<std::string> ignored;
+  std::vector<units::Warning> ignored;
   return 1e6 * correlation_MJ_per_kg(dry_analysis(as_received(analysis, "analysis", ignored)), correlation);
 }
 
@@ -316,7 +316,7 @@ struct HeatingValue {
 // published correlation's estimate for the analysis is warned about: it usually means a basis or
 // unit mix-up.
 HeatingValue measured_heating_value(const MeasuredHeatingValue& hv, const AsReceived& r, const UltimateAnalysis& dry,
-                                    const std::string& hv_field, std::vector<std::string>& warnings) {
+                                    const std::string& hv_field, std::vector<units::Warning>& warnings) {
   if (!std::isfinite(hv.value_J_per_kg) || hv.value_J_per_kg <= 0.0) {
     throw units::InputError(fmt::format("{} = {:.6g} MJ/kg: a heating value must be a finite number above 0", hv_field,
                                         hv.value_J_per_kg * 1e-6));
@@ -345,11 +345,11 @@ HeatingValue measured_heating_value(const MeasuredHeatingValue& hv, const AsRece
       1e6 * correlation_MJ_per_kg(dry, HeatingValueCorrelation::channiwala_parikh) * (1.0 - r.moisture);
   const double gap = value.hhv_J_per_kg / estimate - 1.0;
   if (std::abs(gap) > 0.10) {
-    warnings.push_back(fmt::format(
-        "{}: the HHV ({:.4g} MJ/kg as received) differs by {:+.0f} % from the {} estimate ({:.4g} MJ/kg) for this "
+    warnings.push_back({hv_field, fmt::format("{:.6g} MJ/kg", hv.value_J_per_kg * 1e-6), fmt::format(
+        "the HHV ({:.4g} MJ/kg as received) differs by {:+.0f} % from the {} estimate ({:.4g} MJ/kg) for this "
         "analysis; check the heating value's basis and unit",
-        hv_field, value.hhv_J_per_kg * 1e-6, gap * 100.0, correlation_name(HeatingValueCorrelation::channiwala_parikh),
-        estimate * 1e-6));
+        value.hhv_J_per_kg * 1e-6, gap * 100.0, correlation_name(HeatingValueCorrelation::channiwala_parikh),
+        estimate * 1e-6)});
   }
   return value;
 }
@@ -357,7 +357,7 @@ HeatingValue measured_heating_value(const MeasuredHeatingValue& hv, const AsRece
 // From a correlation on the dry analysis; always warned about, as an estimate is not a measurement.
 HeatingValue estimated_heating_value(HeatingValueCorrelation correlation, const AsReceived& r,
                                      const UltimateAnalysis& dry, const std::string& hv_field,
-                                     std::vector<std::string>& warnings) {
+                                     std::vector<units::Warning>& warnings) {
   const double hhv_dry = 1e6 * correlation_MJ_per_kg(dry, correlation);
   if (!(hhv_dry > 0.0)) {
     throw units::InputError(fmt::format("{}: the {} estimate is {:.4g} MJ/kg (dry), not a usable heating value",
@@ -367,8 +367,8 @@ HeatingValue estimated_heating_value(HeatingValueCorrelation correlation, const 
   value.hhv_J_per_kg = hhv_dry * (1.0 - r.moisture);
   value.method = fmt::format("estimated HHV ({:.4g} MJ/kg dry) by the {} correlation: {}", hhv_dry * 1e-6,
                              correlation_name(correlation), correlation_citation(correlation));
-  warnings.push_back(fmt::format("{}: the HHV is an estimate by the {} correlation, not a measurement", hv_field,
-                                 correlation_name(correlation)));
+  warnings.push_back({hv_field, "", fmt::format("the HHV is an estimate by the {} correlation, not a measurement",
+                                               correlation_name(correlation))});
   return value;
 }
 
@@ -419,8 +419,8 @@ Fuel Fuel::condensed(const CondensedFuelSpec& spec, const SpeciesDatabase& datab
   fuel.heating_value_method_ = std::move(heating_value.method);
   fuel.lhv_J_per_kg_ = fuel.hhv_J_per_kg_ - vaporisation_J_per_kg_water() * water_formed_kg_per_kg(r);
   if (!(fuel.lhv_J_per_kg_ > 0.0)) {
-    fuel.warnings_.push_back(fmt::format("{}: the LHV as received is {:.4g} MJ/kg: too wet to release net heat",
-                                         hv_field, fuel.lhv_J_per_kg_ * 1e-6));
+    fuel.warnings_.push_back({hv_field, "", fmt::format("the LHV as received is {:.4g} MJ/kg: too wet to release net heat",
+                                                        fuel.lhv_J_per_kg_ * 1e-6)});
   }
 
   fuel.element_mol_per_kg_ = condensed_element_moles(r);
@@ -501,7 +501,9 @@ Fuel Fuel::blend(std::string name, const std::vector<BlendPart>& parts, BlendBas
     fuel.ash_kg_per_kg_ += w * part.ash_kg_per_kg_;
     fuel.hhv_J_per_kg_ += w * part.hhv_J_per_kg_;
     fuel.lhv_J_per_kg_ += w * part.lhv_J_per_kg_;
-    for (const std::string& warning : part.warnings_) fuel.warnings_.push_back(fmt::format("{}: {}", part.name_, warning));
+    for (const units::Warning& warning : part.warnings_) {
+      fuel.warnings_.push_back({warning.field, warning.value, fmt::format("{}: {}", part.name_, warning.message)});
+    }
   }
   std::string parts_text;
   for (std::size_t i = 0; i < parts.size(); ++i) {

@@ -33,6 +33,7 @@
 #include <vector>
 
 #include "stackbound/core/species_database.hpp"
+#include "stackbound/units/warning.hpp"
 
 namespace stackbound::core {
 
@@ -198,7 +199,7 @@ class Fuel {
   [[nodiscard]] bool sensible_heat_known() const { return condensed_mass_fraction_ == 0.0 || specific_heat_known_; }
 
   // Notes raised while building the fuel (normalised sums, estimated heating values ...).
-  [[nodiscard]] const std::vector<std::string>& warnings() const { return warnings_; }
+  [[nodiscard]] const std::vector<units::Warning>& warnings() const { return warnings_; }
 
  private:
   Fuel() = default;
@@ -217,7 +218,7 @@ class Fuel {
   double hhv_J_per_kg_ = 0.0;
   double lhv_J_per_kg_ = 0.0;
   std::string heating_value_method_;
-  std::vector<std::string> warnings_;
+  std::vector<units::Warning> warnings_;
 };
 
 struct BlendPart {

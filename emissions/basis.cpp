@@ -1,6 +1,7 @@
 #include "stackbound/emissions/basis.hpp"
 
 #include <algorithm>
+#include <regex>
 #include <array>
 #include <cctype>
 #include <charconv>
@@ -389,15 +390,42 @@ Basis make_basis(ConcentrationUnit unit, Moisture moisture, DiluentReference ref
   return basis;
 }
 
-PartialBasis parse_partial_basis(std::string_view text, std::string_view field) {
+namespace {
+
+// The forms permits write, turned into items: "ppmvd @ 3% O2", "ppmvd at 15 % O2",
+// "mg/Nm3 @ 15% O2 dry" -> "ppmvd, O2=3%", "ppmvd, O2=15%", "mg/Nm3, O2=15%, dry". Text without them
+// is returned unchanged (so its errors point at what was written).
+std::string items_of_permit_form(std::string_view text) {
+  static const std::regex level(R"((?:@|\bat\b)\s*([0-9]+(?:\.[0-9]+)?)\s*%\s*(CO2|O2)\b)", std::regex::icase);
+  static const std::regex moisture(R"(\s+(dry|wet)\b)", std::regex::icase);
+  const std::string written(text);
+  std::string items = std::regex_replace(written, level, ",$2=$1%,");
+  if (items == written) return written;
+  items = std::regex_replace(items, moisture, ",$1");
+  std::vector<std::string> kept;
+  std::size_t start = 0;
+  while (start <= items.size()) {
+    const std::size_t comma = std::min(items.find(',', start), items.size());
+    const std::string_view item = trim(std::string_view(items).substr(start, comma - start));
+    if (!item.empty()) kept.emplace_back(item);
+    start = comma + 1;
+  }
+  return fmt::format("{}", fmt::join(kept, ", "));
+}
+
+}  // namespace
+
+PartialBasis parse_partial_basis(std::string_view written, std::string_view field) {
   PartialBasis basis;
-  if (trim(text).empty()) return basis;
+  if (trim(written).empty()) return basis;
+  const std::string items = items_of_permit_form(written);
+  const std::string_view text = items;
   std::size_t start = 0;
   while (start <= text.size()) {
     const std::size_t comma = std::min(text.find(',', start), text.size());
     const std::string_view item = trim(text.substr(start, comma - start));
-    if (item.empty()) reject(field, text, "empty item between commas");
-    apply_item(basis, item, field, text);
+    if (item.empty()) reject(field, written, "empty item between commas");
+    apply_item(basis, item, field, written);
     start = comma + 1;
   }
   return basis;
@@ -523,7 +551,14 @@ StatedValue split_stated_value(std::string_view text, std::string_view field) {
         fmt::format("{} = \"{}\": no number found; give a number with its unit, e.g. \"35 ppm\"", field, text));
   }
   if (!std::isfinite(number)) throw units::InputError(fmt::format("{} = \"{}\": not a finite number", field, text));
-  return {number, std::string(end, text.data() + text.size())};
+  const std::string_view rest(end, static_cast<std::size_t>(text.data() + text.size() - end));
+  if (rest.size() > 1 && rest.front() == ',' && std::isdigit(static_cast<unsigned char>(rest[1])) != 0) {
+    const std::string_view before(text.data() + first, static_cast<std::size_t>(end - (text.data() + first)));
+    throw units::InputError(fmt::format("{} = \"{}\": a decimal comma; write a decimal point (\"{}.{}\"); commas "
+                                        "separate items",
+                                        field, text, before, rest.substr(1)));
+  }
+  return {number, std::string(rest)};
 }
 
 }  // namespace stackbound::emissions

@@ -7,6 +7,7 @@
 #include "stackbound/emissions/emission_rate.hpp"
 #include "stackbound/emissions/limit_screening.hpp"
 #include "stackbound/emissions/pollutant.hpp"
+#include "stackbound/emissions/published_f_factors.hpp"
 #include "stackbound/emissions/reference_correction.hpp"
 #include "stackbound/emissions/reference_o2_presets.hpp"
 #include "stackbound/emissions/screening_reading.hpp"

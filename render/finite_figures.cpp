@@ -58,6 +58,7 @@ void require_finite_figures(const cases::Report& report) {
     }
   }
   for (const std::string& flag : report.flags) require_finite_text(flag, "a flag");
+  for (const std::string& warning : report.warnings) require_finite_text(warning, "a warning");
 }
 
 }  // namespace stackbound::render

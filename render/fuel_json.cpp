@@ -1,5 +1,6 @@
 #include "stackbound/render/fuel_json.hpp"
 
+#include "stackbound/render/warnings_json.hpp"
 #include "stackbound/units/constants.hpp"
 #include "stackbound/units/normal_conditions.hpp"
 #include "stackbound/units/quantity_parser.hpp"
@@ -101,7 +102,7 @@ nlohmann::json fuel_json(const cases::FuelAnswer& answer) {
       {"Fw_m3_per_GJ", r.f_factors.fw_m3_per_GJ()},
       {"Fc_m3_per_GJ", r.f_factors.fc_m3_per_GJ()},
       {"f_factor_conditions", "US EPA Method 19 definitions; 20 degC (68 degF), 101.325 kPa; HHV"},
-      {"warnings", r.warnings},
+      {"warnings", warnings_json(r.warnings)},
       {"caution", caution_one_line()},
   };
   if (answer.rates) {

@@ -9,3 +9,4 @@
 #include "stackbound/render/svg_plot.hpp"
 #include "stackbound/render/sweep_csv.hpp"
 #include "stackbound/render/sweep_html.hpp"
+#include "stackbound/render/warnings_json.hpp"

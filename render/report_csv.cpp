@@ -25,6 +25,7 @@ std::string render_csv(const Report& report) {
   if (!report.subtitle.empty()) out += csv_line({"# " + report.subtitle});
   for (const auto& [label, value] : report.summary) out += csv_line({"# " + label, value});
   for (const std::string& flag : report.flags) out += csv_line({"# finding: " + flag});
+  for (const std::string& warning : report.warnings) out += csv_line({"# warning: " + warning});
   for (const std::string& caution : report.cautions) out += csv_line({"# caution: " + caution});
   for (const ReportTable& table : report.tables) {
     out += "\n" + csv_line({"# " + table.title});

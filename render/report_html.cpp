@@ -73,6 +73,11 @@ std::string render_html(const Report& report) {
     for (const std::string& flag : report.flags) html += "<li>" + escape_html(flag) + "</li>\n";
     html += "</ul></section>\n";
   }
+  if (!report.warnings.empty()) {
+    html += "<section class=\"flags\"><h2>Warnings</h2><ul>\n";
+    for (const std::string& warning : report.warnings) html += "<li>" + escape_html(warning) + "</li>\n";
+    html += "</ul></section>\n";
+  }
   for (const ReportTable& table : report.tables) html += table_html(table);
   if (!report.plots.empty()) {
     html += "<h2>Plots</h2>\n";

@@ -84,6 +84,10 @@ std::string render_text(const Report& report) {
     out += "\nFindings\n--------\n";
     for (const std::string& flag : report.flags) append_wrapped(out, "  ! ", flag);
   }
+  if (!report.warnings.empty()) {
+    out += "\nWarnings\n--------\n";
+    for (const std::string& warning : report.warnings) append_wrapped(out, "  ? ", warning);
+  }
   if (!report.assumptions.empty()) {
     out += "\nAssumptions\n-----------\n";
     for (const std::string& assumption : report.assumptions) append_wrapped(out, "  - ", assumption);

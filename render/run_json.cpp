@@ -1,6 +1,7 @@
 #include "stackbound/render/run_json.hpp"
 
 #include "stackbound/cases/run_document.hpp"
+#include "stackbound/render/warnings_json.hpp"
 #include "stackbound/units/constants.hpp"
 
 #include <optional>
@@ -225,7 +226,13 @@ nlohmann::json run_json(const RunResult& r, const Provenance& provenance) {
         {"heat_input_hhv_MW", feed.heat_input_hhv_W / 1e6},
         {"Fd_dscf_per_MMBtu", r.resolved.combustion.f_factors.fd_dscf_per_MMBtu()},
         {"Fw_wscf_per_MMBtu", r.resolved.combustion.f_factors.fw_wscf_per_MMBtu()},
-        {"Fc_scf_per_MMBtu", r.resolved.combustion.f_factors.fc_scf_per_MMBtu()}}},
+        {"Fc_scf_per_MMBtu", r.resolved.combustion.f_factors.fc_scf_per_MMBtu()},
+        {"f_factors",
+         {{"choice", f_factor_choice_name(r.resolved.f_factors.choice)},
+          {"source", r.resolved.f_factors.source},
+          {"Fd_dscf_per_MMBtu", r.resolved.f_factors.fd.scf_per_MMBtu()},
+          {"Fw_wscf_per_MMBtu", r.resolved.f_factors.fw.scf_per_MMBtu()},
+          {"Fc_scf_per_MMBtu", r.resolved.f_factors.fc.scf_per_MMBtu()}}}}},
       {"combustion",
        {{"air_ratio", r.resolved.combustion.air_ratio},
         {"excess_air_percent", r.resolved.combustion.excess_air() * 100.0},
@@ -265,7 +272,7 @@ nlohmann::json run_json(const RunResult& r, const Provenance& provenance) {
       {"limits", limits},
       {"measured", measured},
       {"findings", r.screening.findings},
-      {"warnings", r.screening.warnings},
+      {"warnings", warnings_json(r.screening.warnings)},
       {"assumptions", r.screening.assumptions},
       {"cautions", r.screening.cautions},
       {"caution_keys", r.screening.caution_keys},

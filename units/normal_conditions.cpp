@@ -1,10 +1,14 @@
 #include "stackbound/units/normal_conditions.hpp"
 
+#include <algorithm>
 #include <array>
 #include <string>
 
+#include <fmt/format.h>
+
 #include "stackbound/units/constants.hpp"
 #include "stackbound/units/input_error.hpp"
+#include "stackbound/units/quantity_parser.hpp"
 
 namespace stackbound::units {
 
@@ -44,6 +48,35 @@ const NormalConditions& normal_conditions_by_key(std::string_view key, std::stri
   }
   throw InputError(std::string(field) + " = \"" + std::string(key) + "\": unknown normal conditions; accepted: " +
                    accepted);
+}
+
+StatedNormalConditions::StatedNormalConditions(double temperature_K, double pressure_Pa)
+    : key_(fmt::format("{:g}degC/{:g}kPa", temperature_K - kCelsiusOffset_K, pressure_Pa / 1e3)),
+      description_(fmt::format("{:g} degC, {:g} kPa (stated)", temperature_K - kCelsiusOffset_K, pressure_Pa / 1e3)),
+      conditions_{key_, description_, temperature_K, pressure_Pa} {}
+
+std::shared_ptr<const StatedNormalConditions> stated_normal_conditions(std::string_view text, std::string_view field) {
+  const std::size_t comma = text.find(',');
+  const auto refuse = [&](const std::string& problem) {
+    throw InputError(std::string(field) + " = \"" + std::string(text) + "\": " + problem);
+  };
+  if (comma == std::string_view::npos || text.find(',', comma + 1) != std::string_view::npos) {
+    refuse("expected a key (0C, 15C, 20C, 60F, IED) or a temperature and a pressure, e.g. \"25 degC, 101.325 kPa\"");
+  }
+  const auto part = [&](std::string_view piece) {
+    const std::size_t start = std::min(piece.find_first_not_of(" \t"), piece.size());
+    const std::size_t end = piece.find_last_not_of(" \t");
+    return parse_quantity(piece.substr(start, end == std::string_view::npos ? 0 : end + 1 - start), field,
+                          {Dimension::temperature, Dimension::pressure});
+  };
+  const ParsedQuantity first = part(text.substr(0, comma));
+  const ParsedQuantity second = part(text.substr(comma + 1));
+  if (first.dimension == second.dimension) refuse("give one temperature and one pressure, e.g. \"25 degC, 101.325 kPa\"");
+  const double temperature_K = first.dimension == Dimension::temperature ? first.value_si : second.value_si;
+  const double pressure_Pa = first.dimension == Dimension::pressure ? first.value_si : second.value_si;
+  if (!(temperature_K >= 250.0 && temperature_K <= 350.0)) refuse("the temperature must be between 250 K and 350 K");
+  if (!(pressure_Pa >= 80e3 && pressure_Pa <= 120e3)) refuse("the pressure must be between 80 kPa and 120 kPa");
+  return std::make_shared<const StatedNormalConditions>(temperature_K, pressure_Pa);
 }
 
 NormalVolume NormalVolume::from_cubic_metres(double normal_m3, const NormalConditions& conditions) {

@@ -3,6 +3,7 @@
 // not a volume: it always names the temperature and pressure it refers to. Molar volumes follow
 // from the ideal-gas law V_m = R T / p with R from CODATA 2018.
 
+#include <memory>
 #include <span>
 #include <string>
 #include <string_view>
@@ -40,6 +41,27 @@ std::span<const NormalConditions> all_normal_conditions();
 // Looks a preset up by key ("0C", "15C", "20C", "60F", "IED"); throws InputError naming the
 // field, the text and the accepted keys.
 const NormalConditions& normal_conditions_by_key(std::string_view key, std::string_view field);
+
+// Normal conditions stated as a temperature and pressure ("25 degC, 101.325 kPa"), owning the texts
+// its NormalConditions view: made once by stated_normal_conditions() and shared, never copied or
+// moved (the views would dangle).
+class StatedNormalConditions {
+ public:
+  StatedNormalConditions(double temperature_K, double pressure_Pa);
+  StatedNormalConditions(const StatedNormalConditions&) = delete;
+  StatedNormalConditions& operator=(const StatedNormalConditions&) = delete;
+  [[nodiscard]] const NormalConditions& conditions() const { return conditions_; }
+
+ private:
+  std::string key_;          // "25degC/101.325kPa"
+  std::string description_;  // "25 degC, 101.325 kPa (stated)"
+  NormalConditions conditions_;
+};
+
+// Parses "25 degC, 101.325 kPa" (a temperature and a pressure, in either order) into shared stated
+// conditions. Throws InputError naming `field` for another form, or a temperature outside 250-350 K or
+// a pressure outside 80-120 kPa (typing errors, not reference states; common practice, no source).
+std::shared_ptr<const StatedNormalConditions> stated_normal_conditions(std::string_view text, std::string_view field);
 
 // An amount of gas expressed as a normal volume at named conditions.
 class NormalVolume {

@@ -343,10 +343,36 @@ LeadingNumber leading_number(std::string_view body, std::string_view text, std::
   return {number, token};
 }
 
+// Mistakes whose nearest symbol would change the meaning get their own message: a temperature scale
+// written as a letter ("1477 C" is degC, not K), and an actual volume flow ("m3/h"), which is an
+// amount of gas only at a stated temperature and pressure. (A decimal comma, "12,5 %", is a malformed
+// number: leading_number says to write the decimal point.)
+void reject_meaning_changing_slips(std::string_view symbol, std::string_view token, std::string_view text,
+                                   std::string_view field, std::initializer_list<Dimension> accepted) {
+  if (contains(accepted, D::temperature) && (symbol == "C" || symbol == "F")) {
+    reject(field, text,
+           "unknown unit \"" + std::string(symbol) + "\" (did you mean \"deg" + std::string(symbol) + "\"? write \"" +
+               std::string(token) + " deg" + std::string(symbol) + "\")",
+           accepted);
+  }
+  const std::string compact = without_spaces(symbol);
+  static constexpr std::array<std::string_view, 8> kActualFlows{"m3/h", "m3/s", "m3/hr", "m3/min",
+                                                                "m\u00b3/h", "m\u00b3/s", "acfm", "ft3/min"};
+  if (contains(accepted, D::molar_flow) &&
+      std::find(kActualFlows.begin(), kActualFlows.end(), compact) != kActualFlows.end()) {
+    reject(field, text,
+           "\"" + compact + "\" is an actual volume flow: it is an amount of gas only at the temperature and pressure "
+           "of the meter; convert the reading with them to a normal-volume flow (e.g. Nm3/h at 0 degC, 101.325 kPa) "
+           "or give a mass flow; m3/h is not Nm3/h",
+           accepted);
+  }
+}
+
 // Rejects `symbol`, which is no unit, with the likeliest reason: a second number after `token`, a
 // unit written with spaces, text after a unit, or an unknown symbol (with the nearest accepted one).
 [[noreturn]] void reject_unknown_unit(std::string_view symbol, std::string_view token, std::string_view text,
                                       std::string_view field, std::initializer_list<Dimension> accepted) {
+  reject_meaning_changing_slips(symbol, token, text, field, accepted);
   const std::string_view first_word = symbol.substr(0, std::min(symbol.find_first_of(kSpace), symbol.size()));
   const std::string_view after_first = trim(symbol.substr(first_word.size()));
   if (kNumberStart.find(first_word.front()) != std::string_view::npos) {

@@ -5,4 +5,5 @@
 #include "stackbound/units/normal_conditions.hpp"
 #include "stackbound/units/quantities.hpp"
 #include "stackbound/units/quantity_parser.hpp"
+#include "stackbound/units/warning.hpp"
 #include "stackbound/units/nearest_name.hpp"

@@ -158,7 +158,7 @@ TEST(Burn, SubStoichiometricFlueGasHoldsCoAndH2AtShiftEquilibrium) {
   const double K = std::exp(-(g("CO2") + g("H2") - g("CO") - g("H2O")));
   EXPECT_TRUE(is_close(co2 * h2 / (co * h2o), K, 1e-9));
   bool warned = false;
-  for (const std::string& w : r.warnings) warned = warned || w.find("water-gas-shift") != std::string::npos;
+  for (const units::Warning& w : r.warnings) warned = warned || w.message.find("water-gas-shift") != std::string::npos;
   EXPECT_TRUE(warned);
 }
 
@@ -225,7 +225,9 @@ TEST(Burn, HotFuelWithoutSpecificHeatIsFlagged) {
   op.fuel_temperature = units::kelvin(380.0);
   const CombustionResult r = burn(Fuel::condensed(spec, db()), Oxidant{}, op, db());
   bool warned = false;
-  for (const std::string& w : r.warnings) warned = warned || w.find("fuel.temperature = 380.00 K") != std::string::npos;
+  for (const units::Warning& w : r.warnings) {
+    warned = warned || units::warning_text(w).find("fuel.temperature = \"380.00 K\"") != std::string::npos;
+  }
   EXPECT_TRUE(warned);
 }
 

@@ -52,8 +52,9 @@ CondensedFuelSpec coal_spec(UltimateAnalysis analysis, double hhv_MJ_per_kg, Ana
   return spec;
 }
 
-bool has_warning_containing(const std::vector<std::string>& warnings, const std::string& fragment) {
-  for (const std::string& w : warnings) {
+bool has_warning_containing(const std::vector<units::Warning>& warnings, const std::string& fragment) {
+  for (const units::Warning& warning : warnings) {
+    const std::string w = units::warning_text(warning);
     if (w.find(fragment) != std::string::npos) return true;
   }
   return false;
@@ -78,7 +79,7 @@ TEST(GasFuel, SmallSumDifferenceIsNormalisedWithAWarning) {
   const Fuel off = gas({{"CH4", 94.5}, {"C2H6", 5.0}});  // 99.5 %
   const Fuel exact = gas({{"CH4", 94.5 / 0.995}, {"C2H6", 5.0 / 0.995}});
   EXPECT_TRUE(is_close(off.hhv_J_per_kg(), exact.hhv_J_per_kg(), 1e-12));
-  EXPECT_TRUE(has_warning_containing(off.warnings(), "fuel.gas: the mole percentages sum to 99.5 %; normalised to 100 %"));
+  EXPECT_TRUE(has_warning_containing(off.warnings(), "fuel.gas = \"99.5 %\": the mole percentages sum to 99.5 %; normalised to 100 %"));
   EXPECT_TRUE(exact.warnings().empty());
 }
 
@@ -331,7 +332,7 @@ TEST(FuelPresets, EveryPresetBuildsAndNamesItsSource) {
     EXPECT_FALSE(fuel.source().empty()) << preset.key;
     EXPECT_NE(fuel.source().find("typical"), std::string::npos) << preset.key;
     EXPECT_GT(fuel.hhv_J_per_kg(), fuel.lhv_J_per_kg()) << preset.key;
-    EXPECT_TRUE(fuel.warnings().empty()) << preset.key << ": " << (fuel.warnings().empty() ? "" : fuel.warnings()[0]);
+    EXPECT_TRUE(fuel.warnings().empty()) << preset.key << ": " << (fuel.warnings().empty() ? "" : units::warning_text(fuel.warnings()[0]));
   }
   EXPECT_THROW_WITH((void)preset_fuel("natural-gas", db(), "fuel.preset"), units::InputError,
                     "fuel.preset = \"natural-gas\": unknown fuel preset; did you mean \"natural_gas\"?");

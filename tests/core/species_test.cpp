@@ -16,11 +16,11 @@ const SpeciesDatabase& db() { return cases::builtin_species(); }
 // Wrong if a record were lost or renamed when the data file was written.
 TEST(SpeciesData, HoldsEveryPublishedRecordByFormula) {
   for (const char* formula : {"CO2", "CO", "O2", "O", "H2O", "H2", "H", "OH", "HO2", "H2O2", "N2", "N", "NO", "NO2",
-                              "N2O", "NH3", "HCN", "Ar", "He", "CH4", "C2H6", "C3H8", "n-C4H10", "i-C4H10", "C2H4",
+                              "N2O", "NH3", "HCN", "Ar", "He", "CH4", "C2H6", "C3H8", "n-C4H10", "i-C4H10", "n-C5H12", "i-C5H12", "n-C6H14", "C2H4",
                               "C2H2", "C3H6", "CH3OH", "CH2O", "SO2", "SO3", "SO", "H2S", "COS", "S", "HS", "C(gr)"}) {
     EXPECT_NE(db().find(formula), nullptr) << formula;
   }
-  EXPECT_EQ(db().size(), 37u);
+  EXPECT_EQ(db().size(), 40u);
 }
 
 // Wrong if names were matched case-insensitively (AR vs Ar) or typos were accepted.

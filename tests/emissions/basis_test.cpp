@@ -195,5 +195,35 @@ TEST(Basis, MakeBasisChecksTheSameRules) {
   EXPECT_THROW_WITH((void)mass_unit("ppmv", units::normal_0C()), units::InputError, "not a mass-per-normal-volume unit");
 }
 
+// Wrong if the forms permits write ("25 ppmvd @ 3% O2", "at 15 % O2", "@ 15% O2 dry") were refused,
+// or read as another basis than the comma-separated one they mean.
+TEST(Basis, ReadsTheFormsPermitsWrite) {
+  const struct {
+    const char* written;
+    const char* canonical;
+  } forms[] = {
+      {"ppmvd @ 3% O2", "ppmvd, O2=3%"},
+      {"ppmvd at 15 % O2", "ppmvd, O2=15%"},
+      {"mg/Nm3 @ 15% O2 dry", "mg/Nm3, dry, O2=15%"},
+      {"mg/Nm3 dry @ 6 % O2", "mg/Nm3, dry, O2=6%"},
+      {"ppmv, dry @ 7% O2", "ppmv, dry, O2=7%"},
+      {"ppmvd @ 12% CO2", "ppmvd, CO2=12%"},
+  };
+  for (const auto& form : forms) {
+    EXPECT_TRUE(parse_basis(form.written, "limit").same_as(parse_basis(form.canonical, "limit"))) << form.written;
+  }
+  // Text without the form keeps its own errors.
+  EXPECT_THROW_WITH((void)parse_basis("ppmvd O2 3", "limit"), units::InputError,
+                    "limit = \"ppmvd O2 3\": unknown item \"ppmvd O2 3\": items are separated by commas");
+}
+
+// Wrong if a decimal comma ("12,5 ppm") were read as 12 with an empty item, or the message did not
+// say what to write.
+TEST(Basis, ADecimalCommaSaysToWriteADecimalPoint) {
+  EXPECT_THROW_WITH((void)split_stated_value("12,5 ppm, dry", "limit"), units::InputError,
+                    "limit = \"12,5 ppm, dry\": a decimal comma; write a decimal point (\"12.5 ppm, dry\"); commas "
+                    "separate items");
+}
+
 }  // namespace
 }  // namespace stackbound::emissions

@@ -5,6 +5,8 @@
 #include <fmt/format.h>
 #include <gtest/gtest.h>
 
+#include "stackbound/cases/case_file.hpp"
+#include "stackbound/cases/pipeline.hpp"
 #include "stackbound/cases/species_file.hpp"
 #include "stackbound/core/combustion.hpp"
 #include "stackbound/core/fuel_presets.hpp"
@@ -183,6 +185,22 @@ TEST(FFactors, SiAndUsUnitsAgree) {
   EXPECT_TRUE(is_close(f.fw_wscf_per_MMBtu(), f.fw_m3_per_GJ() * factor, 1e-12));
   EXPECT_TRUE(is_close(f.fc_scf_per_MMBtu(), f.fc_m3_per_GJ() * factor, 1e-12));
   EXPECT_TRUE(is_close(factor, 37.2589, 1e-5));
+}
+
+// Wrong if a case choosing report.f_factors: published did not run on Table 19-2's Fd for its fuel.
+TEST(FFactors, PublishedChoiceRunsOnTable19_2) {
+  const cases::CaseDefinition definition = cases::parse_case(
+      "case:\n  title: F-factors (invented)\nfuel:\n  preset: natural_gas\n  feed_rate: 10 MW\noperating_point:\n"
+      "  excess_air: 15 %\nfiring:\n  temperature: 1800 K\nreport:\n  reference_o2: 3 %\n  f_factors: published\n",
+      "f.yaml");
+  const double fd = cases::run_case(definition, db()).resolved.f_factors.fd.scf_per_MMBtu();
+  // Source: 40 CFR 75 Appendix F, Table 1 (same values as Method 19 Table 19-2), natural gas Fd 8710
+  // dscf/10^6 Btu at 20 degC, 29.92 in Hg (reproduction).
+  record_published_check({"Fd used with report.f_factors: published, natural gas preset", "20 degC, 29.92 in Hg",
+                          "8710 dscf/MMBtu",
+                          "40 CFR 75 Appendix F Table 1 (same values as Method 19 Table 19-2), reproduction",
+                          "0.01 % relative (the table value used as is)", fd});
+  EXPECT_TRUE(is_close(fd, 8710.0, 1e-4));
 }
 
 }  // namespace

@@ -30,5 +30,22 @@ TEST(NormalConditions, UnknownKeyIsRefusedWithTheAcceptedKeys) {
                     "--normal = \"25C\": unknown normal conditions; accepted: 0C, 15C, 20C, 60F, IED");
 }
 
+// Wrong if normal conditions stated as a temperature and a pressure were refused, read in the wrong
+// order, or gave another molar volume than R T / p; or if a slip in them were accepted.
+TEST(NormalConditions, StatedTemperatureAndPressure) {
+  const auto stated = stated_normal_conditions("25 degC, 101.325 kPa", "report.normal_conditions");
+  EXPECT_DOUBLE_EQ(stated->conditions().temperature_K, 298.15);
+  EXPECT_DOUBLE_EQ(stated->conditions().pressure_Pa, 101325.0);
+  EXPECT_EQ(stated->conditions().description, "25 degC, 101.325 kPa (stated)");
+  const auto reversed = stated_normal_conditions("1 atm, 298.15 K", "n");
+  EXPECT_DOUBLE_EQ(reversed->conditions().molar_volume_m3_per_mol(), stated->conditions().molar_volume_m3_per_mol());
+  EXPECT_THROW_WITH((void)stated_normal_conditions("25 degC, 101.325", "report.normal_conditions"), InputError,
+                    "report.normal_conditions = \"101.325\": a unit is required");
+  EXPECT_THROW_WITH((void)stated_normal_conditions("25 degC, 30 degC", "n"), InputError,
+                    "n = \"25 degC, 30 degC\": give one temperature and one pressure, e.g. \"25 degC, 101.325 kPa\"");
+  EXPECT_THROW_WITH((void)stated_normal_conditions("250 degC, 1 atm", "n"), InputError,
+                    "n = \"250 degC, 1 atm\": the temperature must be between 250 K and 350 K");
+}
+
 }  // namespace
 }  // namespace stackbound::units

@@ -266,5 +266,26 @@ TEST(QuantityParserErrors, ArbitraryTextEitherParsesToAFiniteValueOrThrowsInputE
   EXPECT_GT(parsed, 0);  // the sample does contain valid text, so the loop tested both branches
 }
 
+// Wrong if a suggestion changed the meaning: "1477 C" is degC (not K), "m3/h" an actual volume flow
+// that is never offered as Nm3/h, and a decimal comma is answered with the decimal point to write.
+TEST(QuantityParser, SuggestionsKeepTheMeaning) {
+  EXPECT_THROW_WITH(parse_temperature("1477 C", "firing.temperature"), InputError,
+                    "firing.temperature = \"1477 C\": unknown unit \"C\" (did you mean \"degC\"? write \"1477 degC\")");
+  EXPECT_THROW_WITH(parse_temperature("300 F", "t"), InputError, "(did you mean \"degF\"? write \"300 degF\")");
+  EXPECT_THROW_WITH(parse_quantity("1150 m3/h", "fuel.feed_rate", {D::mass_flow, D::molar_flow, D::power}), InputError,
+                    "fuel.feed_rate = \"1150 m3/h\": \"m3/h\" is an actual volume flow: it is an amount of gas only at "
+                    "the temperature and pressure of the meter; convert the reading with them to a normal-volume flow "
+                    "(e.g. Nm3/h at 0 degC, 101.325 kPa) or give a mass flow; m3/h is not Nm3/h");
+  try {
+    (void)parse_quantity("1150 m3/h", "fuel.feed_rate", {D::molar_flow});
+    ADD_FAILURE() << "m3/h accepted";
+  } catch (const InputError& error) {
+    EXPECT_EQ(std::string(error.what()).find("did you mean"), std::string::npos) << error.what();
+  }
+  EXPECT_THROW_WITH(parse_quantity("12,5 %", "operating_point.flue_o2", {D::fraction}), InputError,
+                    "operating_point.flue_o2 = \"12,5 %\": malformed number \"12,5\": write the decimal point as "
+                    "\".\" and no thousands separators");
+}
+
 }  // namespace
 }  // namespace stackbound::units
