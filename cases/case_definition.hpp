@@ -10,6 +10,7 @@
 #include <variant>
 #include <vector>
 
+#include "stackbound/cases/readings_spec.hpp"
 #include "stackbound/core/fuel.hpp"
 #include "stackbound/emissions/concentration.hpp"
 #include "stackbound/emissions/limit_screening.hpp"
@@ -166,6 +167,7 @@ struct CaseDefinition {
   PostFlameSpec post_flame;
   StackSpec stack;
   ReportSpec report;
+  std::optional<ReadingsSpec> readings;        // the analyser-data mapping of `stackbound reduce`
 };
 
 }  // namespace stackbound::cases

@@ -9,6 +9,7 @@
 #include "stackbound/cases/fuel_spec.hpp"
 #include "stackbound/cases/input_file.hpp"
 #include "stackbound/cases/plausible_ranges.hpp"
+#include "stackbound/cases/readings_section.hpp"
 #include "stackbound/cases/yaml_reader.hpp"
 #include "stackbound/emissions/basis.hpp"
 #include "stackbound/units/input_error.hpp"
@@ -324,7 +325,7 @@ void check_reference_o2(const CaseDefinition& definition, const std::optional<Ya
 LoadedCase parse_case_file(std::string_view text, const std::string& origin) {
   LoadedCase loaded{CaseDefinition{}, SourceMap(origin)};
   const YamlField root = YamlField::load(text, origin, &loaded.sources);
-  root.allow_only({"case", "fuel", "air", "operating_point", "firing", "post_flame", "stack", "report"});
+  root.allow_only({"case", "fuel", "air", "operating_point", "firing", "post_flame", "stack", "report", "readings"});
   CaseDefinition& definition = loaded.definition;
   definition.origin = origin;
   const YamlField info = root.required("case");
@@ -345,6 +346,9 @@ LoadedCase parse_case_file(std::string_view text, const std::string& origin) {
   definition.stack = stack_spec(root.optional("stack"), normal_conditions(report));
   if (report) definition.report = report_spec(*report);
   check_reference_o2(definition, report);
+  if (const auto readings = root.optional("readings")) {
+    definition.readings = readings_section(*readings, *definition.report.normal);
+  }
   // A section left out is the file's: errors about its defaults are reported at the file.
   for (const std::string_view section : kSections) {
     if (!loaded.sources.location_of(section)) loaded.sources.add(std::string(section), origin);
