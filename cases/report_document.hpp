@@ -32,6 +32,8 @@ struct ReportPlot {
   // Logarithmic y axis (decades): for figures spanning orders of magnitude, such as an estimate
   // beside its bound. Values <= 0 are then not drawn.
   bool log_y = false;
+  // Ranges of x drawn as shaded bands behind the series (e.g. invalid averaging periods).
+  std::vector<std::pair<double, double>> shaded_x{};
 };
 
 struct Report {
