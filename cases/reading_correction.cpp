@@ -82,8 +82,11 @@ CorrectedReading ReadingCorrector::correct(const RawReading& reading) const {
     const em::Concentration measured(value_of(reading, mapped.slot), mapped.pollutant, mapped.basis, spec_.source(mapped.slot)->field);
     auto& figures = out.figures[i];
     figures.fill(kNaN);
-    for (std::size_t k = 0; k < targets_.size(); ++k) figures[k] = measured.to(targets_[k], context).value();
-    if (has_flow) {
+    // Without a measured O2 a value stated at an O2 level has no "as measured" figures (ppmvd, mass rate).
+    const bool as_measured_known =
+        context.o2_dry_fraction || mapped.basis.reference.kind() == em::DiluentReference::Kind::as_measured;
+    for (std::size_t k = as_measured_known ? 0 : 1; k < targets_.size(); ++k) figures[k] = measured.to(targets_[k], context).value();
+    if (has_flow && as_measured_known) {
       const em::Concentration on_flow = measured.to(flow_targets_[i], context);
       figures[static_cast<std::size_t>(FigureKey::kg_per_h)] = on_flow.value() * on_flow.basis().unit.kg_per_mol_per_unit() *
                                                                value_of(reading, ReadingSlot::flow) * kSecondsPerHour;
