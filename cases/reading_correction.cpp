@@ -7,6 +7,7 @@
 #include "stackbound/emissions/concentration.hpp"
 #include "stackbound/emissions/fo_factor.hpp"
 #include "stackbound/emissions/gas_turbine_iso.hpp"
+#include "stackbound/emissions/reference_correction.hpp"
 
 namespace stackbound::cases {
 
@@ -24,17 +25,17 @@ ReadingCorrector::ReadingCorrector(const CaseDefinition& definition, const Readi
                                    double reference_o2_dry_fraction)
     : spec_(spec),
       o2_basis_(definition.report.o2_basis),
+      reference_o2_(reference_o2_dry_fraction),
       at_15_o2_(em::make_basis(em::mole_unit("ppmv"), em::Moisture::dry, em::DiluentReference::o2(0.15))) {
   const units::NormalConditions& normal = *definition.report.normal;
   const em::DiluentReference reference = em::DiluentReference::o2(reference_o2_dry_fraction);
   targets_ = {em::make_basis(em::mole_unit("ppmv"), em::Moisture::dry, em::DiluentReference::as_measured()),
               em::make_basis(em::mole_unit("ppmv"), em::Moisture::dry, reference),
               em::make_basis(em::mass_unit("mg/Nm3", normal), em::Moisture::dry, reference)};
+  kg_per_mol_per_mg_ = targets_[2].unit.kg_per_mol_per_unit();
   for (std::size_t i = 0; i < spec.pollutants.size(); ++i) {
     const em::Pollutant& pollutant = spec.pollutants[i].pollutant;
-    flow_targets_.push_back(em::make_basis(em::mass_unit("mg/Nm3", normal),
-                                           spec.flow_dry ? em::Moisture::dry : em::Moisture::wet,
-                                           em::DiluentReference::as_measured(), pollutant.expressed_as_no2));
+    molar_masses_.push_back(em::basis_molar_mass_kg_per_mol(pollutant, pollutant.expressed_as_no2, "to give mg/Nm3"));
     if (pollutant.name == "NOx") nox_index_ = i;
   }
   gas_turbine_iso_ = definition.plant_type.find("gas-turbine") != std::string::npos && nox_index_ &&
@@ -85,12 +86,23 @@ CorrectedReading ReadingCorrector::correct(const RawReading& reading) const {
     // Without a measured O2 a value stated at an O2 level has no "as measured" figures (ppmvd, mass rate).
     const bool as_measured_known =
         context.o2_dry_fraction || mapped.basis.reference.kind() == em::DiluentReference::Kind::as_measured;
-    for (std::size_t k = as_measured_known ? 0 : 1; k < targets_.size(); ++k) figures[k] = measured.to(targets_[k], context).value();
-    if (has_flow && as_measured_known) {
-      const em::Concentration on_flow = measured.to(flow_targets_[i], context);
-      figures[static_cast<std::size_t>(FigureKey::kg_per_h)] = on_flow.value() * on_flow.basis().unit.kg_per_mol_per_unit() *
-                                                               value_of(reading, ReadingSlot::flow) * kSecondsPerHour;
+    // One conversion by Concentration::to to ppmvd as measured; the rest by the same factors convert
+    // applies: the O2 correction factor, the molar mass over the molar volume.
+    double at_ref = kNaN;
+    if (as_measured_known) {
+      const double ppmvd = measured.to(targets_[0], context).value();
+      figures[static_cast<std::size_t>(FigureKey::ppmvd)] = ppmvd;
+      at_ref = ppmvd * em::o2_correction_factor(*context.o2_dry_fraction, reference_o2_, o2_basis_);
+      if (has_flow) {
+        const double dry_flow_mol_per_s = value_of(reading, ReadingSlot::flow) * (spec_.flow_dry ? 1.0 : 1.0 - h2o);
+        figures[static_cast<std::size_t>(FigureKey::kg_per_h)] =
+            ppmvd * 1e-6 * molar_masses_[i] * dry_flow_mol_per_s * kSecondsPerHour;
+      }
+    } else {
+      at_ref = measured.to(targets_[1], context).value();
     }
+    figures[static_cast<std::size_t>(FigureKey::ppmvd_at_ref_o2)] = at_ref;
+    figures[static_cast<std::size_t>(FigureKey::mg_per_Nm3_at_ref_o2)] = at_ref * 1e-6 * molar_masses_[i] / kg_per_mol_per_mg_;
     if (gas_turbine_iso_ && nox_index_ == i) {
       figures[static_cast<std::size_t>(FigureKey::nox_iso_ppmvd_at_15_o2)] =
           measured.to(at_15_o2_, context).value() * iso_factor(reading);

@@ -46,7 +46,9 @@ class ReadingCorrector {
   const ReadingsSpec& spec_;
   emissions::O2Basis o2_basis_;
   std::vector<emissions::Basis> targets_;       // ppmvd, ppmvd at ref, mg/Nm3 at ref
-  std::vector<emissions::Basis> flow_targets_;  // per pollutant: mg/Nm3 as measured on the flow's wet/dry basis
+  double reference_o2_ = 0.0;
+  double kg_per_mol_per_mg_ = 0.0;              // of mg/Nm3 at the report's normal conditions
+  std::vector<double> molar_masses_;            // per pollutant, of its mass basis (NO2 for NOx)
   emissions::Basis at_15_o2_;
   std::optional<std::size_t> nox_index_;
   bool gas_turbine_iso_ = false;

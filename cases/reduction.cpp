@@ -420,6 +420,7 @@ ReductionDocument reduce_readings(const CaseDefinition& definition, const core::
   std::vector<std::size_t> excluded_counts(spec.status ? spec.status->exclude.size() : 0, 0);
   FoTally fo;
   std::optional<HourAccumulator> hour;
+  SysSeconds last_time{};
   RawReading reading;
   RowProblem problem;
   const bool load_mapped = spec.source(ReadingSlot::load).has_value();
@@ -441,6 +442,7 @@ ReductionDocument reduce_readings(const CaseDefinition& definition, const core::
     }
     ++summary.readings;
     if (summary.readings == 1) summary.first_reading = clock.text(reading.time);
+    last_time = reading.time;
     const SysSeconds start = clock.hour_start(reading.time);
     if (hour && hour->start() != start) {
       sink.add_hour(hour->finish(clock));
@@ -455,8 +457,8 @@ ReductionDocument reduce_readings(const CaseDefinition& definition, const core::
     if (!operating) ++summary.zero_load_readings;
     if (corrected) ++summary.valid_readings;
     if (corrected && corrected->fo) fo.add(*corrected->fo, fo_range);
-    summary.last_reading = clock.text(reading.time);
   }
+  if (summary.readings > 0) summary.last_reading = clock.text(last_time);
   if (hour) sink.add_hour(hour->finish(clock));
   sink.finish();
   if (options.progress) options.progress(reader.bytes_read());
