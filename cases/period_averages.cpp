@@ -179,8 +179,14 @@ ReductionPeriod combine_periods(const std::vector<const ReductionPeriod*>& units
         counts[i][k] += 1.0;
       }
     }
-    if (!std::isnan(unit->o2_percent_dry)) o2 += unit->o2_percent_dry, ++o2_n;
-    if (!std::isnan(unit->fo)) fo += unit->fo, ++fo_n;
+    if (!std::isnan(unit->o2_percent_dry)) {
+      o2 += unit->o2_percent_dry;
+      ++o2_n;
+    }
+    if (!std::isnan(unit->fo)) {
+      fo += unit->fo;
+      ++fo_n;
+    }
   }
   for (std::size_t i = 0; i < n_pollutants; ++i) {
     PeriodPollutant value{setup.pollutants[i], {}, kNoValue};

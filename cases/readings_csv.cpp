@@ -18,6 +18,9 @@ namespace stackbound::cases {
 
 namespace {
 
+// Far above any analyser export: a longer line is refused as not a readings file.
+constexpr std::size_t kMaxLineBytes = std::size_t{1} << 16;
+
 std::string_view trim(std::string_view text) {
   while (!text.empty() && (text.front() == ' ' || text.front() == '\t')) text.remove_prefix(1);
   while (!text.empty() && (text.back() == ' ' || text.back() == '\t' || text.back() == '\r')) text.remove_suffix(1);
@@ -140,6 +143,11 @@ bool ReadingsCsvReader::read_line() {
   while (std::getline(input_, line_)) {
     ++line_number_;
     bytes_ += line_.size() + 1;
+    if (line_.size() > kMaxLineBytes) {
+      throw units::InputError(fmt::format("{}:{}: a line of {} bytes: not a readings file (at most {} bytes a line)", origin_,
+                                          line_number_, line_.size(), kMaxLineBytes));
+    }
+    if (line_number_ == 1 && line_.rfind("\xEF\xBB\xBF", 0) == 0) line_.erase(0, 3);  // a UTF-8 byte-order mark
     const std::string_view text = trim(line_);
     if (text.empty() || text.front() == '#') continue;
     return true;

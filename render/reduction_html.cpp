@@ -73,12 +73,17 @@ std::optional<ReportPlot> fo_plot(const ReductionDocument& document) {
     expected.x.push_back(x);
     expected.y.push_back(fo->expected);
     if (fo->range) {
-      low.x.push_back(x), low.y.push_back(fo->range->low);
-      high.x.push_back(x), high.y.push_back(fo->range->high);
+      low.x.push_back(x);
+      low.y.push_back(fo->range->low);
+      high.x.push_back(x);
+      high.y.push_back(fo->range->high);
     }
   }
   plot.series = {mean, expected};
-  if (fo->range) plot.series.push_back(low), plot.series.push_back(high);
+  if (fo->range) {
+    plot.series.push_back(std::move(low));
+    plot.series.push_back(std::move(high));
+  }
   plot.shaded_x = invalid_spans(document);
   return plot;
 }
