@@ -184,6 +184,9 @@ void check_context(const ReadingsSpec& spec, const YamlField& readings) {
   const std::string moisture_hint = "; map readings.moisture: {column: H2O} or {value: 12 %}";
   if (spec.source(ReadingSlot::o2) && !spec.o2_dry && !has_moisture) needs("o2", "a wet O2 column needs the moisture" + moisture_hint);
   if (spec.source(ReadingSlot::co2) && !spec.co2_dry && !has_moisture) needs("co2", "a wet CO2 column needs the moisture" + moisture_hint);
+  if (spec.source(ReadingSlot::flow) && !spec.flow_dry && !has_moisture) {
+    needs("flow", "a wet flow needs the moisture to give the dry flow of the mass rates" + moisture_hint);
+  }
   for (const PollutantReading& p : spec.pollutants) {
     const std::string key = spec.source(p.slot)->key;
     if (p.basis.moisture == em::Moisture::wet && !has_moisture) {

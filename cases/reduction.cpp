@@ -150,8 +150,8 @@ namespace {
 // hour statistics of the summary.
 class PeriodSink {
  public:
-  PeriodSink(const AveragingSetup& setup, const AveragePeriod& average, ReadingClock& clock, ReductionDocument& document)
-      : setup_(setup), average_(average), clock_(clock), document_(document) {
+  PeriodSink(const AveragingSetup& setup, const ReduceOptions& options, ReadingClock& clock, ReductionDocument& document)
+      : setup_(setup), options_(options), average_(options.average), clock_(clock), document_(document) {
     for (const std::string& name : setup.pollutants) {
       PollutantSummary summary;
       summary.pollutant = name;
@@ -195,7 +195,8 @@ class PeriodSink {
         }
       }
     }
-    document_.periods.push_back(std::move(period));
+    if (options_.on_period) options_.on_period(document_, period);
+    if (options_.keep_periods) document_.periods.push_back(std::move(period));
   }
 
   void tally_hour(const ReductionPeriod& hour) {
@@ -318,6 +319,7 @@ class PeriodSink {
 
  private:
   const AveragingSetup& setup_;
+  const ReduceOptions& options_;
   const AveragePeriod& average_;
   ReadingClock& clock_;
   ReductionDocument& document_;
@@ -415,7 +417,7 @@ ReductionDocument reduce_readings(const CaseDefinition& definition, const core::
 
   ReadingsCsvReader reader(spec, definition.report.o2_basis, readings, origin);
   ReadingClock& clock = reader.clock();
-  PeriodSink sink(setup, options.average, clock, document);
+  PeriodSink sink(setup, options, clock, document);
   ReductionSummary& summary = document.summary;
   std::vector<std::size_t> excluded_counts(spec.status ? spec.status->exclude.size() : 0, 0);
   FoTally fo;

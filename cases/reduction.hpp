@@ -25,6 +25,11 @@ struct ReduceOptions {
   std::size_t listed_problems = 5;        // malformed rows listed with their lines (all are counted)
   // Called now and then with the bytes read so far (a progress bar); may be empty.
   std::function<void(std::size_t bytes_read)> progress;
+  // Called with each output period as it closes (the document holds the header fields by then), e.g. to
+  // write CSV rows as they come; with keep_periods false the document's periods stay empty, so memory
+  // does not grow with the number of periods. The summary is the same either way.
+  std::function<void(const ReductionDocument& document, const ReductionPeriod& period)> on_period;
+  bool keep_periods = true;
 };
 
 // `definition` must have a readings section (InputError naming `readings` otherwise). `origin` names

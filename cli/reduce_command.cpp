@@ -121,6 +121,24 @@ void add_reduce_command(CLI::App& app, const GlobalOptions& global) {
     const ProgressBar bar("bytes");
     ReduceOptions with_progress = reduce_options;
     if (total > (std::size_t{8} << 20)) with_progress.progress = [&](std::size_t done) { bar.update(std::min(done, total), total); };
+    // CSV to a file is written row by row (the file still appears whole or not at all): memory then
+    // does not grow with the number of periods.
+    if (options->format == "csv" && !options->output.empty() && options->output != "-") {
+      OutputStream stream(options->output);
+      bool header = false;
+      with_progress.keep_periods = false;
+      with_progress.on_period = [&](const ReductionDocument& document, const ReductionPeriod& period) {
+        if (!header) stream.write(render::reduction_csv_header(document));
+        header = true;
+        stream.write(render::reduction_csv_row(document, period));
+      };
+      const ReductionDocument document = with_positions(loaded.sources, [&] {
+        return reduce_readings(loaded.definition, database, input, options->readings, with_progress);
+      });
+      if (!header) stream.write(render::reduction_csv_header(document));
+      stream.commit();
+      return;
+    }
     const ReductionDocument document = with_positions(loaded.sources, [&] {
       return reduce_readings(loaded.definition, database, input, options->readings, with_progress);
     });

@@ -13,6 +13,9 @@ namespace stackbound::render {
 
 nlohmann::json reduction_json(const cases::ReductionDocument& document);
 std::string render_reduction_csv(const cases::ReductionDocument& document);
+// The CSV header line and one period's row (for writing rows as they come: ReduceOptions::on_period).
+std::string reduction_csv_header(const cases::ReductionDocument& document);
+std::string reduction_csv_row(const cases::ReductionDocument& document, const cases::ReductionPeriod& period);
 std::string render_reduction_html(const cases::ReductionDocument& document);
 // One of "csv", "json", "html".
 std::string render_reduction(const cases::ReductionDocument& document, const std::string& format);

@@ -56,6 +56,29 @@ TEST(ReadingsSection, UnknownKeysAndMissingBasisAreNamed) {
                     units::InputError, "readings.nox");
 }
 
+// Wrong if a wet flow's mass rate were computed without the moisture (it needs the dry flow).
+TEST(ReadingsSection, WetFlowWithoutMoistureIsRefused) {
+  EXPECT_THROW_WITH(parse_case(reduction_case_text(basic_readings() + "  flow: {column: Q, unit: Nm3/h}\n"), "test.yaml"),
+                    units::InputError, "a wet flow needs the moisture");
+}
+
+// Wrong if the mass rate were not concentration x molar mass (NO2 for NOx) x dry flow: 100 ppm NOx in
+// a dry flow of 22 413.97 Nm3/h at 0 degC (1000 kmol/h) is 1e-4 x M(NO2) x 1e6 mol/h.
+TEST(ReadingCorrection, MassRateFromADryFlow) {
+  const CaseDefinition definition =
+      parse_case(reduction_case_text(basic_readings() + "  flow: {column: Q, unit: Nm3/h, basis: dry}\n"), "test.yaml");
+  const ReadingCorrector corrector(definition, *definition.readings, 0.03);
+  RawReading reading;
+  reading.values[static_cast<std::size_t>(ReadingSlot::o2)] = 0.05;
+  reading.values[static_cast<std::size_t>(ReadingSlot::nox)] = 100.0;
+  // The column's unit: 22 413.97 Nm3/h at 0 degC read as 1000 kmol/h (mol/s in the reading).
+  const double flow_mol_per_s = 22413.969545 * definition.readings->source(ReadingSlot::flow)->scale;
+  EXPECT_TRUE(is_close(flow_mol_per_s * 3600.0, 1e6, 1e-6));
+  reading.values[static_cast<std::size_t>(ReadingSlot::flow)] = flow_mol_per_s;
+  const double kg_per_h = corrector.correct(reading).figures[kNox][static_cast<std::size_t>(FigureKey::kg_per_h)];
+  EXPECT_TRUE(is_close(kg_per_h, 1e-4 * em::no2_molar_mass_kg_per_mol() * flow_mol_per_s * 3600.0, 1e-12));
+}
+
 // Wrong if a mapped column missing from the CSV header were not named with the columns there are.
 TEST(ReadingsCsv, MissingColumnNamesTheHeader) {
   EXPECT_THROW_WITH(reduce_text(reduction_case_text(basic_readings()), "time,O2,status\n"), units::InputError,

@@ -1,6 +1,8 @@
 // The `stackbound reduce` command, run as a process on the invented demo day and on small files.
 
+#include <algorithm>
 #include <filesystem>
+#include <iterator>
 #include <fstream>
 #include <string>
 
@@ -81,6 +83,22 @@ TEST(ReduceCommand, StrictAndBadOptionsExitTwoWithTheReason) {
   const auto rules = run_stackbound({"reduce", kCase, kDay, "--rules", "part60"});
   EXPECT_EQ(rules.exit_code, 2);
   EXPECT_NE(rules.err.find("accepted: us-part60, eu-ied, none"), std::string::npos) << rules.err;
+}
+
+// Wrong if the CSV written row by row to a file (constant memory) differed from the CSV on stdout.
+TEST(ReduceCommand, CsvToAFileEqualsStandardOutput) {
+  const auto dir = std::filesystem::temp_directory_path() / "stackbound_reduce_csv_test";
+  std::filesystem::create_directories(dir);
+  const auto file = dir / "day.csv";
+  const auto to_file = run_stackbound({"reduce", kCase, kDay, "--rules", "us-part60", "--output", file.string()});
+  ASSERT_EQ(to_file.exit_code, 0) << to_file.err;
+  const auto to_stdout = run_stackbound({"reduce", kCase, kDay, "--rules", "us-part60"});
+  ASSERT_EQ(to_stdout.exit_code, 0) << to_stdout.err;
+  std::ifstream in(file);
+  const std::string written((std::istreambuf_iterator<char>(in)), std::istreambuf_iterator<char>());
+  EXPECT_EQ(written, to_stdout.out);
+  EXPECT_EQ(std::count(written.begin(), written.end(), '\n'), 25);  // header and 24 hours
+  std::filesystem::remove_all(dir);
 }
 
 // Wrong if the HTML page lost its time-series plots or the shading of invalid periods.
