@@ -104,7 +104,7 @@ CorrectedReading ReadingCorrector::correct(const RawReading& reading) const {
     figures[static_cast<std::size_t>(FigureKey::ppmvd_at_ref_o2)] = at_ref;
     figures[static_cast<std::size_t>(FigureKey::mg_per_Nm3_at_ref_o2)] = at_ref * 1e-6 * molar_masses_[i] / kg_per_mol_per_mg_;
     if (gas_turbine_iso_ && nox_index_ == i) {
-      figures[static_cast<std::size_t>(FigureKey::nox_iso_ppmvd_at_15_o2)] =
+      figures[static_cast<std::size_t>(FigureKey::iso_corrected_ppmvd_at_15_o2)] =
           measured.to(at_15_o2_, context).value() * iso_factor(reading);
     }
     if (mapped.pollutant.name == "CO") co_dry_fraction = figures[0] * 1e-6;

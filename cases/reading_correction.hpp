@@ -17,7 +17,7 @@
 namespace stackbound::cases {
 
 // The per-pollutant figures kept for averages, in this order.
-enum class FigureKey : std::size_t { ppmvd, ppmvd_at_ref_o2, mg_per_Nm3_at_ref_o2, kg_per_h, nox_iso_ppmvd_at_15_o2 };
+enum class FigureKey : std::size_t { ppmvd, ppmvd_at_ref_o2, mg_per_Nm3_at_ref_o2, kg_per_h, iso_corrected_ppmvd_at_15_o2 };
 inline constexpr std::size_t kFigureKeys = 5;
 inline constexpr std::size_t kMaxReadingPollutants = 4;
 

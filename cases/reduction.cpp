@@ -25,7 +25,7 @@ std::string_view figure_key_name(FigureKey key) {
     case FigureKey::ppmvd_at_ref_o2: return "ppmvd_at_ref_o2";
     case FigureKey::mg_per_Nm3_at_ref_o2: return "mg_per_Nm3_at_ref_o2";
     case FigureKey::kg_per_h: return "kg_per_h";
-    case FigureKey::nox_iso_ppmvd_at_15_o2: break;
+    case FigureKey::iso_corrected_ppmvd_at_15_o2: break;
   }
   return "iso_corrected_ppmvd_at_15_o2";
 }

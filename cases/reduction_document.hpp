@@ -8,6 +8,7 @@
 #include <limits>
 #include <optional>
 #include <string>
+#include <string_view>
 #include <utility>
 #include <vector>
 
@@ -128,5 +129,11 @@ struct ReductionDocument {
   std::vector<std::string> warnings;
   std::vector<std::string> cautions;
 };
+
+// Whether a figure is reported for a pollutant: all but the ISO-corrected NOx, which only a gas turbine's
+// NOx with mapped ambient columns has.
+inline bool figure_reported(const ReductionDocument& document, std::string_view pollutant, FigureKey key) {
+  return key != FigureKey::iso_corrected_ppmvd_at_15_o2 || (document.gas_turbine_iso && pollutant == "NOx");
+}
 
 }  // namespace stackbound::cases

@@ -13,9 +13,6 @@ namespace {
 
 std::string cell(double v) { return std::isfinite(v) ? fmt::format("{:.6g}", v) : std::string(); }
 
-bool shown(const ReductionDocument& document, const std::string& pollutant, FigureKey key) {
-  return key != FigureKey::nox_iso_ppmvd_at_15_o2 || (document.gas_turbine_iso && pollutant == "NOx");
-}
 
 }  // namespace
 
@@ -25,7 +22,7 @@ std::string reduction_csv_header(const ReductionDocument& document) {
   std::string out = "start,end,valid,invalid_reason,readings,excluded_readings,missing_readings,o2_percent_dry,fo";
   for (const std::string& p : document.pollutants) {
     for (std::size_t k = 0; k < kFigureKeys; ++k) {
-      if (shown(document, p, static_cast<FigureKey>(k))) out += fmt::format(",{}_{}", p, figure_key_name(static_cast<FigureKey>(k)));
+      if (figure_reported(document, p, static_cast<FigureKey>(k))) out += fmt::format(",{}_{}", p, figure_key_name(static_cast<FigureKey>(k)));
     }
     out += fmt::format(",{}_validated_mg_per_Nm3_at_ref_o2", p);
   }
@@ -38,7 +35,7 @@ std::string reduction_csv_row(const ReductionDocument& document, const Reduction
                                 cell(period.o2_percent_dry), cell(period.fo));
   for (const PeriodPollutant& v : period.values) {
     for (std::size_t k = 0; k < kFigureKeys; ++k) {
-      if (shown(document, v.pollutant, static_cast<FigureKey>(k))) out += "," + cell(v.figures[k]);
+      if (figure_reported(document, v.pollutant, static_cast<FigureKey>(k))) out += "," + cell(v.figures[k]);
     }
     out += "," + cell(v.validated_mg_per_Nm3_at_ref_o2);
   }

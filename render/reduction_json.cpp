@@ -18,7 +18,7 @@ json period_values(const ReductionDocument& document, const ReductionPeriod& per
     json figures = json::object();
     for (std::size_t k = 0; k < kFigureKeys; ++k) {
       const auto key = static_cast<FigureKey>(k);
-      if (key == FigureKey::nox_iso_ppmvd_at_15_o2 && !(document.gas_turbine_iso && p.pollutant == "NOx")) continue;
+      if (!figure_reported(document, p.pollutant, key)) continue;
       figures[std::string(figure_key_name(key))] = number(p.figures[k]);
     }
     figures["validated_mg_per_Nm3_at_ref_o2"] = number(p.validated_mg_per_Nm3_at_ref_o2);
@@ -55,7 +55,7 @@ json pollutant_summary_json(const ReductionDocument& document, const PollutantSu
   json figures = json::object();
   for (std::size_t k = 0; k < kFigureKeys; ++k) {
     const auto key = static_cast<FigureKey>(k);
-    if (key == FigureKey::nox_iso_ppmvd_at_15_o2 && !(document.gas_turbine_iso && p.pollutant == "NOx")) continue;
+    if (!figure_reported(document, p.pollutant, key)) continue;
     figures[std::string(figure_key_name(key))] = statistics_json(p.figures[k]);
   }
   figures["validated_mg_per_Nm3_at_ref_o2"] = statistics_json(p.validated);
