@@ -84,6 +84,8 @@ std::optional<IsoTime> parse_iso(std::string_view s) {
 
 // An impossible value of a slot (SI / slot units), or nullopt.
 std::optional<std::string> impossible(ReadingSlot slot, double v, emissions::O2Basis basis) {
+  // Far beyond any stack gas in any unit; keeps sums finite.
+  if (std::abs(v) > 1e12) return "implausibly large";
   switch (slot) {
     case ReadingSlot::o2:
       if (v < 0.0 || v > 0.21) return "O2 must be between 0 % and 21 %";

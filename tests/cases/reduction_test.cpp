@@ -143,6 +143,26 @@ TEST(ReadingsCsv, EveryMalformedRowKindIsCountedWithItsLine) {
   EXPECT_EQ(doc.summary.rows, 11U);
 }
 
+// Wrong if hostile rows crashed the reader, slipped into the averages, or made a figure non-finite.
+TEST(ReadingsCsv, HostileRowsAreCountedNeverAveraged) {
+  const std::string csv = kHeader + minute_rows(600, 1, 40) +
+                          "2026-06-15T10:01:00Z,3.0,1e308,OK\n"
+                          "2026-06-15T10:02:00Z,3.0,inf,OK\n"
+                          "2026-06-15T10:03:00Z,3.0,nan,OK\n"
+                          "2026-06-15T10:04:00Z,3.0,2e6,OK\n"  // a mole fraction above 1
+                          "2026-06-15T10:05:00Z,3.0,\x01\xff,OK\n"
+                          "2026-02-30T10:06:00Z,3.0,40,OK\n"
+                          "2026-06-15T10:07:00+25:00,3.0,40,OK\n"
+                          "\"2026-06-15T10:08:00Z\",\"3.0\",\"41\",\"OK\"\n";
+  const ReductionDocument doc = reduce_text(reduction_case_text(basic_readings()), csv);
+  EXPECT_EQ(doc.summary.problems.total(), 7U);
+  EXPECT_EQ(doc.summary.valid_readings, 2U);  // the first row and the quoted one
+  ASSERT_EQ(doc.periods.size(), 1U);
+  EXPECT_TRUE(is_close(doc.periods[0].values[kNox].figures[kPpmvd], 40.5, 1e-12));
+  for (const double v : doc.periods[0].values[kNox].figures) EXPECT_TRUE(std::isnan(v) || std::isfinite(v)) << v;
+  EXPECT_THROW_WITH(reduce_text(reduction_case_text(basic_readings()), ""), units::InputError, "no header row");
+}
+
 // Wrong if --strict went on past a bad row, or did not name its file and line.
 TEST(ReadingsCsv, StrictStopsAtTheFirstMalformedRow) {
   ReduceOptions options;
