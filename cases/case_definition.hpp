@@ -11,6 +11,7 @@
 #include <variant>
 #include <vector>
 
+#include "stackbound/cases/readings_spec.hpp"
 #include "stackbound/core/combustion.hpp"
 #include "stackbound/core/fuel.hpp"
 #include "stackbound/emissions/concentration.hpp"
@@ -191,6 +192,7 @@ struct CaseDefinition {
   // Legal but implausible values found at load (a fraction typed as a percent ...); the run adds its
   // own (run_warnings.hpp) and every output prints them all.
   std::vector<units::Warning> warnings;
+  std::optional<ReadingsSpec> readings;        // the analyser-data mapping of `stackbound reduce`
 };
 
 }  // namespace stackbound::cases

@@ -9,6 +9,7 @@
 #include "stackbound/cases/fuel_spec.hpp"
 #include "stackbound/cases/input_file.hpp"
 #include "stackbound/cases/plausible_ranges.hpp"
+#include "stackbound/cases/readings_section.hpp"
 #include "stackbound/cases/sha256.hpp"
 #include "stackbound/cases/yaml_reader.hpp"
 #include "stackbound/emissions/basis.hpp"
@@ -427,7 +428,7 @@ void check_reference_o2(const CaseDefinition& definition, const std::optional<Ya
 
 // Reads the case from its root mapping; `loaded` holds the source map `root` records into.
 void read_case(const YamlField& root, const std::string& origin, LoadedCase& loaded) {
-  root.allow_only({"case", "fuel", "air", "operating_point", "firing", "post_flame", "stack", "report"});
+  root.allow_only({"case", "fuel", "air", "operating_point", "firing", "post_flame", "stack", "report", "readings"});
   CaseDefinition& definition = loaded.definition;
   definition.origin = origin;
   const YamlField info = root.required("case");
@@ -450,6 +451,9 @@ void read_case(const YamlField& root, const std::string& origin, LoadedCase& loa
   if (report) definition.report = report_spec(*report, normal);
   check_reference_o2(definition, report);
   definition.warnings = load_warnings(definition, root);
+  if (const auto readings = root.optional("readings")) {
+    definition.readings = readings_section(*readings, *definition.report.normal);
+  }
   // A section left out is the file's: errors about its defaults are reported at the file.
   for (const std::string_view section : kSections) {
     if (!loaded.sources.location_of(section)) loaded.sources.add(std::string(section), origin);

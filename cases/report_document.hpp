@@ -33,6 +33,8 @@ struct ReportPlot {
   // Logarithmic y axis (decades): for figures spanning orders of magnitude, such as an estimate
   // beside its bound. Values <= 0 are then not drawn.
   bool log_y = false;
+  // Ranges of x drawn as shaded bands behind the series (e.g. invalid averaging periods).
+  std::vector<std::pair<double, double>> shaded_x{};
 };
 
 // A bar chart of one pollutant's headline figures (drawn in HTML only): one bar per figure on a

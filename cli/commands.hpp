@@ -15,5 +15,6 @@ void add_compare_command(CLI::App& app, const GlobalOptions& global);
 void add_sweep_command(CLI::App& app, const GlobalOptions& global);
 void add_convert_command(CLI::App& app, const GlobalOptions& global);
 void add_fuel_command(CLI::App& app, const GlobalOptions& global);
+void add_reduce_command(CLI::App& app, const GlobalOptions& global);
 
 }  // namespace stackbound::cli

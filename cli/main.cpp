@@ -29,6 +29,7 @@ int main(int argc, char** argv) {
   sb::add_equilibrium_command(app, global);
   sb::add_convert_command(app, global);
   sb::add_fuel_command(app, global);
+  sb::add_reduce_command(app, global);
   try {
     app.parse(argc, argv);
     sb::finish_standard_output();

@@ -5,6 +5,8 @@
 #include "stackbound/emissions/cautions.hpp"
 #include "stackbound/emissions/concentration.hpp"
 #include "stackbound/emissions/emission_rate.hpp"
+#include "stackbound/emissions/fo_factor.hpp"
+#include "stackbound/emissions/gas_turbine_iso.hpp"
 #include "stackbound/emissions/limit_screening.hpp"
 #include "stackbound/emissions/pollutant.hpp"
 #include "stackbound/emissions/published_f_factors.hpp"

@@ -144,6 +144,22 @@ std::string series_lines(const ReportPlot& plot, const Frame& f) {
   return svg;
 }
 
+// The shaded x ranges, clipped to the frame, behind the series.
+std::string shaded_bands(const ReportPlot& plot, const Frame& f) {
+  std::string svg;
+  for (const auto& [from, to] : plot.shaded_x) {
+    const double low = std::max(from, f.x.low), high = std::min(to, f.x.high);
+    if (!(high > low)) continue;
+    svg += fmt::format(R"(<rect x="{:.1f}" y="{}" width="{:.1f}" height="{}" fill="#e8b4b4" fill-opacity="0.45"/>)" "\n",
+                       f.px(low), f.top, f.px(high) - f.px(low), f.height);
+  }
+  if (!svg.empty()) {
+    svg += fmt::format(R"(<text x="{}" y="{}" font-size="11" text-anchor="end">shaded: invalid periods</text>)" "\n",
+                       f.left + f.width - 4, f.top + 12);
+  }
+  return svg;
+}
+
 }  // namespace
 
 std::string render_svg_plot(const ReportPlot& plot, int width_px, int height_px) {
@@ -168,6 +184,7 @@ std::string render_svg_plot(const ReportPlot& plot, int width_px, int height_px)
       "\n",
       width_px, height_px, escape_html(plot.title));
   svg += axes(plot, f);
+  svg += shaded_bands(plot, f);
   svg += series_lines(plot, f);
   svg += "</svg>\n";
   return svg;

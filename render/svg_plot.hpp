@@ -7,7 +7,8 @@
 
 namespace stackbound::render {
 
-// Series with no finite points are listed in the legend as "(no data)". Returns an <svg> element.
+// Series with no finite points are listed in the legend as "(no data)"; plot.shaded_x ranges are drawn as
+// bands behind the series. Returns an <svg> element.
 std::string render_svg_plot(const ReportPlot& plot, int width_px = 640, int height_px = 360);
 
 // Escapes &, <, >, " for HTML/SVG text.

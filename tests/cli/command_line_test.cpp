@@ -75,7 +75,7 @@ TEST(CommandLine, ParseErrorsExit2AndNameWhatWasWrong) {
       {{}, "A subcommand is required"},
       {{"frobnicate"},
        "stackbound: error: unknown command \"frobnicate\"; the commands are run, species, sweep, compare, "
-       "equilibrium, convert, fuel (stackbound --help)"},
+       "equilibrium, convert, fuel, reduce (stackbound --help)"},
       {{"run"}, "CASE is required"},
       {{"run", "x.yaml", "--format", "pdf"}, "--format: pdf not in {text,json,csv,html}"},
       {{"run", "--bogus", "x.yaml"}, "The following argument was not expected: --bogus"},

@@ -25,7 +25,7 @@ using stackbound::testing::run_stackbound;
 
 // The commands whose examples are run; the top-level help must list exactly these (a new command
 // then has its examples run too).
-const std::vector<std::string> kCommands = {"run", "species", "sweep", "compare", "equilibrium", "convert", "fuel"};
+const std::vector<std::string> kCommands = {"run", "species", "sweep", "compare", "equilibrium", "convert", "fuel", "reduce"};
 
 std::string read_file(const fs::path& path) {
   std::ifstream in(path);
