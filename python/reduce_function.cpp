@@ -34,8 +34,6 @@ struct Column {
   [[nodiscard]] std::size_t size() const { return numeric ? numbers.size() : texts.size(); }
 };
 
-std::string type_name(py::handle value) { return py::type::handle_of(value).attr("__name__").cast<std::string>(); }
-
 // A number as the shortest text the reader parses back to the same double; a missing value (NaN) as
 // an empty cell, as pandas writes it to a CSV.
 std::string number_cell(double value) { return std::isnan(value) ? std::string() : fmt::format("{}", value); }
