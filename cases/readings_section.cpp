@@ -73,21 +73,35 @@ bool dry_basis(const YamlField& field, bool default_dry) {
   return basis->choice({"dry", "wet"}) == "dry";
 }
 
+// The unit an error message suggests for a slot without a default unit.
+std::string_view example_unit(ReadingSlot slot) {
+  if (slot == ReadingSlot::flow) return "Nm3/h";
+  if (slot == ReadingSlot::load) return "MW";
+  return "kPa";  // inlet pressure
+}
+
 void scalar_slot(ReadingsSpec& spec, const YamlField& field, const SlotRule& rule) {
   ReadingSource source = source_of(field, rule.key);
   const auto unit_field = field.optional("unit");
-  if (!unit_field && rule.default_unit.empty()) field.fail("needs a unit, e.g. unit: Nm3/h");
+  const auto value = field.optional("value");
+  if (!unit_field && !value && rule.default_unit.empty()) {
+    field.fail(fmt::format("needs a unit, e.g. unit: {}", example_unit(rule.slot)));
+  }
   const std::string unit = unit_field ? unit_field->text() : std::string(rule.default_unit);
-  if (rule.slot == ReadingSlot::load) {
+  if (value) {
+    // A stated constant carries its own unit (load: a power or a fraction).
+    source.constant = value->located([&] {
+      return rule.slot == ReadingSlot::load
+                 ? units::parse_quantity(value->text(), value->path(), {Dimension::power, Dimension::fraction}).value_si
+                 : units::parse_quantity(value->text(), value->path(), {rule.dimension}).value_si;
+    });
+  } else if (rule.slot == ReadingSlot::load) {
     // Load as a power (MW) or a fraction (%).
     const units::ParsedQuantity probe = (unit_field ? *unit_field : field).located(
         [&] { return units::parse_quantity("1 " + unit, field.path() + ".unit", {Dimension::power, Dimension::fraction}); });
     set_unit(source, unit_field ? *unit_field : field, unit, probe.dimension);
   } else {
     set_unit(source, unit_field ? *unit_field : field, unit, rule.dimension);
-  }
-  if (const auto value = field.optional("value")) {
-    source.constant = value->quantity_si(rule.dimension);
   }
   if (rule.slot == ReadingSlot::o2) spec.o2_dry = dry_basis(field, true);
   if (rule.slot == ReadingSlot::co2) spec.co2_dry = dry_basis(field, true);

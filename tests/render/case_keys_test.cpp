@@ -16,7 +16,9 @@
 
 #include "stackbound/cases/case_file.hpp"
 #include "stackbound/cases/pipeline.hpp"
+#include "stackbound/cases/reduction.hpp"
 #include "stackbound/cases/species_file.hpp"
+#include "stackbound/render/reduction_output.hpp"
 #include "stackbound/render/run_json.hpp"
 #include "stackbound/units/input_error.hpp"
 
@@ -163,12 +165,33 @@ std::string edited(const char* base, const std::vector<Edit>& edits) {
   return out.c_str();
 }
 
-// The run's JSON without the file name (the same for both).
+std::string source_file(const std::string& relative) {
+  std::ifstream in(std::string(STACKBOUND_SOURCE_DIR) + "/" + relative);
+  std::stringstream text;
+  text << in.rdbuf();
+  return text.str();
+}
+
+// The gas-turbine example: the base of the `readings` keys (its section maps the invented day's CSV).
+const char* readings_case() {
+  static const std::string text = source_file("cases/examples/gas_turbine.yaml");
+  return text.c_str();
+}
+
+// The run's JSON without the file name (the same for both); for a case with a readings section, also
+// the reduction of the example's invented day of readings.
 std::string result_of(const std::string& text) {
   cases::LoadedCase loaded = cases::parse_case_file(text, "keys.yaml");
+  std::string reduction;
+  if (loaded.definition.readings) {
+    std::istringstream csv(source_file("cases/examples/gas_turbine_readings.csv"));
+    reduction = reduction_json(cases::with_positions(loaded.sources, [&] {
+                  return cases::reduce_readings(loaded.definition, cases::builtin_species(), csv, "readings.csv", {});
+                })).dump();
+  }
   const cases::RunResult run = cases::with_positions(
       loaded.sources, [&] { return cases::run_case(std::move(loaded.definition), cases::builtin_species()); });
-  return run_json(run, cases::Provenance{}).dump();
+  return run_json(run, cases::Provenance{}).dump() + reduction;
 }
 
 const std::vector<KeyCheck>& key_checks() {
@@ -246,6 +269,15 @@ const std::vector<KeyCheck>& key_checks() {
       {"report.limits", kFixed, {{"report.limits", "~remove"}}, ""},
       {"report.limits[].pollutant", kFixed, {{"report.limits[0].pollutant", "NO"}}, ""},
       {"report.limits[].limit", kFixed, {{"report.limits[0].limit", "200 mg/Nm3, dry, O2=3%"}}, ""},
+      {"readings.time", readings_case(), {{"readings.time", "{column: time, zone: UTC}"}}, ""},
+      {"readings.moisture", readings_case(), {{"readings.moisture", "{value: 10 %}"}}, ""},
+      {"readings.flow", readings_case(), {{"readings.flow", "~remove"}}, ""},
+      {"readings.load", readings_case(), {{"readings.load", "{value: 0 MW}"}}, ""},
+      {"readings.status", readings_case(), {{"readings.status", "~remove"}}, ""},
+      {"readings.interval", readings_case(), {{"readings.interval", "2 min"}}, ""},
+      {"readings.delimiter", readings_case(), {{"readings.delimiter", "\";\""}},
+       "readings.time.column = \"time\": no such column in the header"},
+      {"readings.fo_range", readings_case(), {{"readings.fo_range", "bituminous-coal"}}, ""},
   };
   return checks;
 }
@@ -254,7 +286,7 @@ const std::vector<KeyCheck>& key_checks() {
 // another message than its own.
 TEST(CaseKeys, EveryDocumentedKeyChangesTheResultOrIsRefused) {
   std::map<const char*, std::string> base_results;
-  for (const char* base : {kFixed, kAdiabatic, kUltimate, kBlend}) base_results[base] = result_of(base);
+  for (const char* base : {kFixed, kAdiabatic, kUltimate, kBlend, readings_case()}) base_results[base] = result_of(base);
   for (const KeyCheck& check : key_checks()) {
     const std::string text = edited(check.base, check.edits);
     if (check.refused.empty()) {
