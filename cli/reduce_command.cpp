@@ -64,14 +64,14 @@ void add_reduce_command(CLI::App& app, const GlobalOptions& global) {
   command->add_option("--max-invalid-hours", options->query.max_invalid_hours, "Override: invalid hours allowed in a valid day");
   command->add_option("--min-valid-hours", options->query.min_valid_hours, "Override: share of operating hours valid in a longer period (\"75 %\")");
   command->callback([options, &global] {
-    const ReduceOptions reduce_options = library_options(*options);
+    const ReduceOptions chosen = library_options(*options);
     LoadedCase loaded = load_case_file(options->case_file);
     const core::SpeciesDatabase database = species_database(global.species_file);
     ReadingsFile readings = open_readings_file(options->readings);
     const std::size_t total = readings.size;
     std::istream& input = readings.stream;
     const ProgressBar bar("bytes");
-    ReduceOptions with_progress = reduce_options;
+    ReduceOptions with_progress = chosen;
     if (total > (std::size_t{8} << 20)) with_progress.progress = [&](std::size_t done) { bar.update(std::min(done, total), total); };
     // CSV to a file is written row by row (the file still appears whole or not at all): memory then
     // does not grow with the number of periods.
