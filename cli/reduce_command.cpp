@@ -1,21 +1,14 @@
 // `stackbound reduce CASE.yaml READINGS.csv [--format csv|json|html] [--output FILE] [--average hour|day|PERIOD]
 // [--rules us-part60|eu-ied|none]`: analyser readings to corrected, validated averages (cases/reduction.hpp).
 
-#include <sys/stat.h>
-
-#include <fstream>
 #include <memory>
 
-#include <fmt/format.h>
-
 #include "stackbound/cases/case_file.hpp"
-#include "stackbound/cases/reduction.hpp"
+#include "stackbound/cases/reduce_query.hpp"
 #include "stackbound/cases/species_file.hpp"
 #include "stackbound/cli/commands.hpp"
 #include "stackbound/cli/progress_bar.hpp"
 #include "stackbound/render/reduction_output.hpp"
-#include "stackbound/units/input_error.hpp"
-#include "stackbound/units/quantity_parser.hpp"
 
 namespace stackbound::cli {
 
@@ -28,56 +21,15 @@ struct ReduceOptionsCli {
   std::string readings;
   std::string format = "csv";
   std::string output;
-  std::vector<std::string> average{"hour"};
-  std::string rules = "none";
-  bool strict = false;
-  std::size_t listed = 5;
-  std::optional<int> min_quadrants;
-  std::string min_hour_coverage;
-  std::optional<int> max_invalid_hours;
-  std::string min_valid_hours;
+  std::vector<std::string> average{"hour"};  // "30d rolling" may come as two words
+  ReduceQuery query;
 };
 
-std::optional<double> optional_fraction(const std::string& text, std::string_view option) {
-  if (text.empty()) return std::nullopt;
-  const double fraction = units::parse_fraction(text, option);
-  if (!(fraction >= 0.0 && fraction <= 1.0)) {
-    throw units::InputError(fmt::format("{} = \"{}\": must be between 0 % and 100 %", option, text));
-  }
-  return fraction;
-}
-
 ReduceOptions library_options(const ReduceOptionsCli& cli) {
-  ReduceOptions options;
-  options.rules = parse_rule_set(cli.rules, "--rules");
-  std::string average = cli.average.front();
-  for (std::size_t i = 1; i < cli.average.size(); ++i) average += " " + cli.average[i];
-  options.average = parse_average_period(average, "--average");
-  options.strict = cli.strict;
-  options.listed_problems = cli.listed;
-  if (cli.min_quadrants) {
-    if (*cli.min_quadrants < 0 || *cli.min_quadrants > 4) {
-      throw units::InputError(fmt::format("--min-quadrants = {}: must be 0 to 4", *cli.min_quadrants));
-    }
-    options.overrides.min_quadrants = cli.min_quadrants;
-  }
-  if (cli.max_invalid_hours) {
-    if (*cli.max_invalid_hours < 0 || *cli.max_invalid_hours > 24) {
-      throw units::InputError(fmt::format("--max-invalid-hours = {}: must be 0 to 24", *cli.max_invalid_hours));
-    }
-    options.overrides.max_invalid_hours_per_day = cli.max_invalid_hours;
-  }
-  options.overrides.min_hour_coverage = optional_fraction(cli.min_hour_coverage, "--min-hour-coverage");
-  options.overrides.min_valid_hours_fraction = optional_fraction(cli.min_valid_hours, "--min-valid-hours");
-  return options;
-}
-
-// The readings file, opened for streaming: a regular file (or "-" for standard input).
-std::size_t readings_size(const std::string& path) {
-  struct stat info {};
-  if (::stat(path.c_str(), &info) != 0) throw units::InputError(fmt::format("READINGS = \"{}\": no such file", path));
-  if (!S_ISREG(info.st_mode)) throw units::InputError(fmt::format("READINGS = \"{}\": not a regular file", path));
-  return static_cast<std::size_t>(info.st_size);
+  ReduceQuery query = cli.query;
+  query.average = cli.average.front();
+  for (std::size_t i = 1; i < cli.average.size(); ++i) query.average += " " + cli.average[i];
+  return reduce_options(query);
 }
 
 }  // namespace
@@ -103,23 +55,23 @@ void add_reduce_command(CLI::App& app, const GlobalOptions& global) {
                       "Averaging period: hour, day, month, Nh, Nd, optionally followed by rolling (\"30d rolling\")")
       ->expected(1, 2)
       ->default_str("hour");
-  command->add_option("--rules", options->rules, "Rule set: us-part60, eu-ied or none (plain averages)")->default_str("none");
-  command->add_flag("--strict", options->strict, "Stop at the first malformed row");
-  command->add_option("--list-bad-rows", options->listed, "Malformed rows listed with their line numbers (all are counted)")
+  command->add_option("--rules", options->query.rules, "Rule set: us-part60, eu-ied or none (plain averages)")->default_str("none");
+  command->add_flag("--strict", options->query.strict, "Stop at the first malformed row");
+  command->add_option("--list-bad-rows", options->query.listed_problems, "Malformed rows listed with their line numbers (all are counted)")
       ->default_str("5");
-  command->add_option("--min-quadrants", options->min_quadrants, "Override: 15-minute quadrants needing a valid reading (0-4)");
-  command->add_option("--min-hour-coverage", options->min_hour_coverage, "Override: share of an hour's readings that must be valid (\"75 %\")");
-  command->add_option("--max-invalid-hours", options->max_invalid_hours, "Override: invalid hours allowed in a valid day");
-  command->add_option("--min-valid-hours", options->min_valid_hours, "Override: share of operating hours valid in a longer period (\"75 %\")");
+  command->add_option("--min-quadrants", options->query.min_quadrants, "Override: 15-minute quadrants needing a valid reading (0-4)");
+  command->add_option("--min-hour-coverage", options->query.min_hour_coverage, "Override: share of an hour's readings that must be valid (\"75 %\")");
+  command->add_option("--max-invalid-hours", options->query.max_invalid_hours, "Override: invalid hours allowed in a valid day");
+  command->add_option("--min-valid-hours", options->query.min_valid_hours, "Override: share of operating hours valid in a longer period (\"75 %\")");
   command->callback([options, &global] {
-    const ReduceOptions reduce_options = library_options(*options);
+    const ReduceOptions chosen = library_options(*options);
     LoadedCase loaded = load_case_file(options->case_file);
     const core::SpeciesDatabase database = species_database(global.species_file);
-    const std::size_t total = readings_size(options->readings);
-    std::ifstream input(options->readings, std::ios::binary);
-    if (!input) throw units::InputError(fmt::format("READINGS = \"{}\": cannot be read", options->readings));
+    ReadingsFile readings = open_readings_file(options->readings);
+    const std::size_t total = readings.size;
+    std::istream& input = readings.stream;
     const ProgressBar bar("bytes");
-    ReduceOptions with_progress = reduce_options;
+    ReduceOptions with_progress = chosen;
     if (total > (std::size_t{8} << 20)) with_progress.progress = [&](std::size_t done) { bar.update(std::min(done, total), total); };
     // CSV to a file is written row by row (the file still appears whole or not at all): memory then
     // does not grow with the number of periods.

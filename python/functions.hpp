@@ -14,5 +14,6 @@ void add_convert_function(py::module_& module);
 void add_equilibrium_function(py::module_& module);
 void add_fuel_function(py::module_& module);
 void add_sweep_function(py::module_& module);
+void add_reduce_function(py::module_& module);
 
 }  // namespace stackbound::python

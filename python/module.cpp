@@ -14,7 +14,7 @@ PYBIND11_MODULE(stackbound, module) {
   namespace sb = stackbound;
   module.doc() =
       "stackbound - equilibrium-based emissions and stack-gas estimator.\n"
-      "Functions: run, convert, equilibrium, fuel, sweep (docs/python.md). Results are equilibrium bounds at stated\n"
+      "Functions: run, convert, equilibrium, fuel, sweep, reduce (docs/python.md). Results are equilibrium bounds at stated\n"
       "firing conditions, not measurements; permits, regulators, local codes and licensed practice govern.";
   module.attr("__version__") = STACKBOUND_VERSION;
   // A figure that is not finite at the renderer boundary is a defect of the tool, never of the input.
@@ -40,4 +40,5 @@ PYBIND11_MODULE(stackbound, module) {
   sb::python::add_equilibrium_function(module);
   sb::python::add_fuel_function(module);
   sb::python::add_sweep_function(module);
+  sb::python::add_reduce_function(module);
 }

@@ -66,9 +66,9 @@ std::optional<std::string> number_text(py::handle value) {
   return std::nullopt;
 }
 
-std::string type_name(py::handle value) { return py::type::handle_of(value).attr("__name__").cast<std::string>(); }
-
 }  // namespace
+
+std::string type_name(py::handle value) { return py::type::handle_of(value).attr("__name__").cast<std::string>(); }
 
 YAML::Node to_yaml(py::handle value, const std::string& path, std::size_t depth) {
   if (depth > cases::kMaxYamlNesting) {

@@ -38,6 +38,9 @@ std::optional<std::string> option_text(py::handle value, std::string_view option
 // The same, empty when None.
 std::string option_text_or_empty(py::handle value, std::string_view option);
 
+// The name of a value's type, for messages ("float", "dict").
+std::string type_name(py::handle value);
+
 // A path argument: str or os.PathLike; nullopt for anything else (a dict, say).
 std::optional<std::string> path_text(py::handle value);
 
