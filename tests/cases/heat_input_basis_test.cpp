@@ -39,7 +39,8 @@ TEST(HeatInputBasis, TwelveMegawattsOnTheLhvResolveThroughTheLhvForEveryFuelKind
     const double m_lhv = lhv.resolved.rates.feed.mass_flow_kg_per_s;
     EXPECT_TRUE(is_close(m_hhv, 12e6 / hhv.resolved.fuel.hhv_J_per_kg(), 1e-12)) << fuel;
     EXPECT_TRUE(is_close(m_lhv, 12e6 / lhv.resolved.fuel.lhv_J_per_kg(), 1e-12)) << fuel;
-    EXPECT_GT(m_lhv / m_hhv, 1.04) << fuel;  // HHV/LHV is about 1.06-1.11 for these fuels
+    // HHV/LHV is about 1.06-1.11 for these fuels (common practice, no source).
+    EXPECT_GT(m_lhv / m_hhv, 1.04) << fuel;
     EXPECT_NE(lhv.resolved.rates.feed.given.find("(heat input, LHV basis)"), std::string::npos) << fuel;
   }
 }
