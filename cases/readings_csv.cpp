@@ -13,6 +13,7 @@
 #include <fmt/format.h>
 
 #include "stackbound/units/input_error.hpp"
+#include "stackbound/units/plain_text.hpp"
 
 namespace stackbound::cases {
 
@@ -128,8 +129,10 @@ ReadingsCsvReader::ReadingsCsvReader(const ReadingsSpec& spec, emissions::O2Basi
   const auto index_of = [&](const std::string& column, const std::string& field) {
     const auto found = std::find(names.begin(), names.end(), column);
     if (found == names.end()) {
+      std::vector<std::string> shown;
+      for (const std::string& name : names) shown.push_back(units::printable(name));
       throw units::InputError(fmt::format("{}:{}: {} = \"{}\": no such column in the header; the columns are {}", origin_,
-                                          line_number_, field, column, fmt::join(names, ", ")));
+                                          line_number_, field, column, fmt::join(shown, ", ")));
     }
     return static_cast<std::size_t>(found - names.begin());
   };
@@ -174,7 +177,7 @@ void ReadingsCsvReader::split() {
 
 std::optional<RowProblem> ReadingsCsvReader::parse_time(std::string_view text, SysSeconds& time) {
   const auto bad = [&](RowProblemKind kind, std::string_view why) {
-    return RowProblem{kind, line_number_, fmt::format("column {} = \"{}\": {}", spec_.time.column, text, why)};
+    return RowProblem{kind, line_number_, fmt::format("column {} = \"{}\": {}", spec_.time.column, units::printable(text), why)};
   };
   std::optional<IsoTime> parsed;
   if (spec_.time.format.empty()) {
@@ -211,7 +214,7 @@ std::optional<RowProblem> ReadingsCsvReader::parse_values(RawReading& reading) {
     const auto result = fast_float::from_chars(text.data(), text.data() + text.size(), raw);
     if (result.ec != std::errc() || result.ptr != text.data() + text.size() || !std::isfinite(raw)) {
       return RowProblem{RowProblemKind::not_a_number, line_number_,
-                        fmt::format("column {} = \"{}\": not a number", source->column, text)};
+                        fmt::format("column {} = \"{}\": not a number", source->column, units::printable(text))};
     }
     const double value = raw * source->scale + source->offset;
     if (const auto why = impossible(static_cast<ReadingSlot>(slot), value, o2_basis_)) {

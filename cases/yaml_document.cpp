@@ -1,66 +1,15 @@
 #include "stackbound/cases/yaml_document.hpp"
 
 #include <map>
+#include <optional>
 
 #include <fmt/format.h>
 
+#include "stackbound/units/plain_text.hpp"
 #include "stackbound/units/input_error.hpp"
 
 namespace stackbound::cases {
 namespace {
-
-// Line and column (from 1) of byte `offset` of `text`; columns count bytes.
-std::string position(std::string_view origin, std::string_view text, std::size_t offset) {
-  std::size_t line = 1;
-  std::size_t line_start = 0;
-  for (std::size_t i = 0; i < offset; ++i) {
-    if (text[i] == '\n') {
-      ++line;
-      line_start = i + 1;
-    }
-  }
-  return fmt::format("{}:{}:{}", origin, line, offset - line_start + 1);
-}
-
-// Length of the UTF-8 sequence starting at `i`, or 0 if it is not a valid one (overlong forms,
-// surrogates and values above U+10FFFF included).
-std::size_t utf8_sequence_length(std::string_view text, std::size_t i) {
-  const auto byte = [&](std::size_t k) { return static_cast<unsigned char>(text[k]); };
-  const unsigned char lead = byte(i);
-  if (lead < 0x80) return 1;
-  std::size_t length = 0;
-  unsigned char low = 0x80;
-  unsigned char high = 0xBF;
-  if (lead >= 0xC2 && lead <= 0xDF) length = 2;
-  else if (lead >= 0xE0 && lead <= 0xEF) {
-    length = 3;
-    if (lead == 0xE0) low = 0xA0;
-    if (lead == 0xED) high = 0x9F;
-  } else if (lead >= 0xF0 && lead <= 0xF4) {
-    length = 4;
-    if (lead == 0xF0) low = 0x90;
-    if (lead == 0xF4) high = 0x8F;
-  } else {
-    return 0;
-  }
-  if (i + length > text.size()) return 0;
-  if (byte(i + 1) < low || byte(i + 1) > high) return 0;
-  for (std::size_t k = 2; k < length; ++k) {
-    if (byte(i + k) < 0x80 || byte(i + k) > 0xBF) return 0;
-  }
-  return length;
-}
-
-void require_utf8(std::string_view text, std::string_view origin) {
-  for (std::size_t i = 0; i < text.size();) {
-    const std::size_t length = utf8_sequence_length(text, i);
-    if (length == 0) {
-      throw units::InputError(fmt::format("{}: byte 0x{:02X} is not valid UTF-8; save the file as UTF-8",
-                                          position(origin, text, i), static_cast<unsigned char>(text[i])));
-    }
-    i += length;
-  }
-}
 
 // Bracket nesting outside quotes and comments: a deep "[[[[..." would otherwise exhaust the parser.
 void require_shallow_nesting(std::string_view text, std::string_view origin) {
@@ -81,7 +30,7 @@ void require_shallow_nesting(std::string_view text, std::string_view origin) {
       if (++depth > kMaxYamlNesting) {
         throw units::InputError(fmt::format("{}: lists and mappings nest deeper than {} levels here; a stackbound file "
                                             "needs at most a few",
-                                            position(origin, text, i), kMaxYamlNesting));
+                                            units::text_position(origin, text, i), kMaxYamlNesting));
       }
     } else if ((c == ']' || c == '}') && depth > 0) {
       --depth;
@@ -93,11 +42,25 @@ std::string mark_text(std::string_view origin, const YAML::Mark& mark) {
   return fmt::format("{}:{}:{}", origin, mark.line + 1, mark.column + 1);
 }
 
-// Every key a plain scalar, each once per mapping; nesting (also by indentation) capped.
+// A scalar's text after its escapes ("\0", "\N" in double quotes) must be plain text as well.
+void check_scalar_text(const YAML::Node& scalar, std::string_view origin) {
+  if (const std::optional<units::TextFault> fault = units::find_text_fault(scalar.Scalar())) {
+    throw units::InputError(fmt::format("{}: an escape in this value (such as \\0 or \\N) gives text that is not "
+                                        "plain: {} (byte {} of the value); write the value without it",
+                                        mark_text(origin, scalar.Mark()), fault->what, fault->offset + 1));
+  }
+}
+
+// Every key a plain scalar, each once per mapping; every scalar plain text; nesting (also by
+// indentation) capped.
 void check_keys(const YAML::Node& node, std::string_view origin, std::size_t depth) {
   if (depth > kMaxYamlNesting) {
     throw units::InputError(fmt::format("{}: lists and mappings nest deeper than {} levels here",
                                         mark_text(origin, node.Mark()), kMaxYamlNesting));
+  }
+  if (node.IsScalar()) {
+    check_scalar_text(node, origin);
+    return;
   }
   if (node.IsSequence()) {
     for (const YAML::Node& item : node) check_keys(item, origin, depth + 1);
@@ -110,6 +73,7 @@ void check_keys(const YAML::Node& node, std::string_view origin, std::size_t dep
       throw units::InputError(fmt::format("{}: a key must be a plain name, not a list or mapping",
                                           mark_text(origin, entry.first.Mark())));
     }
+    check_scalar_text(entry.first, origin);
     const std::string key = entry.first.Scalar();
     const auto [found, inserted] = first_line.emplace(key, entry.first.Mark().line + 1);
     if (!inserted) {
@@ -124,7 +88,7 @@ void check_keys(const YAML::Node& node, std::string_view origin, std::size_t dep
 }  // namespace
 
 YAML::Node load_yaml_document(std::string_view text, std::string_view origin) {
-  require_utf8(text, origin);
+  units::require_plain_text(text, origin);
   require_shallow_nesting(text, origin);
   YAML::Node root;
   try {

@@ -1,8 +1,9 @@
 #pragma once
 // Loading a YAML document (case, fuel or species file) so that nothing the YAML library would accept
-// in silence or throw in its own words reaches a reader: before parsing, the text must be valid UTF-8
-// and nest at most kMaxYamlNesting brackets deep; after parsing, every mapping key must be a plain
-// scalar and appear once. Every refusal is a units::InputError "<origin>:<line>:<column>: ...".
+// in silence or throw in its own words reaches a reader: before parsing, the text must be plain text
+// (require_plain_text: UTF-8 without stray control characters) and nest at most kMaxYamlNesting
+// brackets deep; after parsing, every mapping key must be a plain scalar and appear once. Every
+// refusal is a units::InputError "<origin>:<line>:<column>: ...".
 
 #include <cstddef>
 #include <string>

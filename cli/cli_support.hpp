@@ -32,6 +32,10 @@ class PartialFailure : public std::runtime_error {
 // Registers `--format` with the accepted values and the default; the help text lists them.
 CLI::Option* add_format_option(CLI::App& command, std::string& format, const std::vector<std::string>& accepted);
 
+// Refuses (units::InputError) a command-line argument that is not plain text (units/plain_text.hpp):
+// an invalid byte or a control character would otherwise reach a report or a JSON document.
+void require_plain_arguments(int argc, const char* const* argv);
+
 // Prints each warning on stderr as 'stackbound: warning: FILE:LINE:COLUMN: field = "value": message',
 // at the field's position in `sources` (else the file's name).
 void print_warnings(const std::vector<units::Warning>& warnings, const cases::SourceMap& sources);

@@ -31,6 +31,7 @@ int main(int argc, char** argv) {
   sb::add_fuel_command(app, global);
   sb::add_reduce_command(app, global);
   try {
+    sb::require_plain_arguments(argc, argv);
     app.parse(argc, argv);
     sb::finish_standard_output();
   } catch (const CLI::CallForHelp& help) {

@@ -10,6 +10,7 @@
 #include "stackbound/units/constants.hpp"
 #include "stackbound/units/input_error.hpp"
 #include "stackbound/units/nearest_name.hpp"
+#include "stackbound/units/plain_text.hpp"
 
 namespace stackbound::units {
 
@@ -164,30 +165,6 @@ std::vector<UnitDefinition> build_table() {
 const std::vector<UnitDefinition>& table() {
   static const std::vector<UnitDefinition> units = build_table();
   return units;
-}
-
-// Control characters (a stray newline from a file, a tab) are shown escaped so that the message
-// stays on one line and shows what was really there.
-std::string printable(std::string_view text) {
-  std::string shown;
-  for (const char c : text) {
-    const auto byte = static_cast<unsigned char>(c);
-    if (c == '\n') {
-      shown += "\\n";
-    } else if (c == '\t') {
-      shown += "\\t";
-    } else if (c == '\r') {
-      shown += "\\r";
-    } else if (byte < 0x20 || byte == 0x7f) {
-      constexpr std::string_view kHex = "0123456789abcdef";
-      shown += "\\x";
-      shown += kHex[byte >> 4];
-      shown += kHex[byte & 0xf];
-    } else {
-      shown += c;
-    }
-  }
-  return shown;
 }
 
 std::string quoted(std::string_view field, std::string_view text) {

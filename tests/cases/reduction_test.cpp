@@ -4,6 +4,7 @@
 
 #include <gtest/gtest.h>
 
+#include <algorithm>
 #include <cmath>
 
 #include <fmt/format.h>
@@ -160,6 +161,11 @@ TEST(ReadingsCsv, HostileRowsAreCountedNeverAveraged) {
   ASSERT_EQ(doc.periods.size(), 1U);
   EXPECT_TRUE(is_close(doc.periods[0].values[kNox].figures[kPpmvd], 40.5, 1e-12));
   for (const double v : doc.periods[0].values[kNox].figures) EXPECT_TRUE(std::isnan(v) || std::isfinite(v)) << v;
+  const auto control_row = std::find_if(doc.summary.problems.first.begin(), doc.summary.problems.first.end(),
+                                        [](const RowProblem& p) { return p.line == 7; });
+  ASSERT_NE(control_row, doc.summary.problems.first.end());
+  EXPECT_EQ(control_row->detail, "column NOx = \"\\x01\\xff\": not a number")
+      << "the bytes are shown escaped: raw, they stopped the JSON report";
   EXPECT_THROW_WITH(reduce_text(reduction_case_text(basic_readings()), ""), units::InputError, "no header row");
 }
 

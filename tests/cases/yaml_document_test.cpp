@@ -14,6 +14,8 @@
 namespace stackbound::cases {
 namespace {
 
+using namespace std::string_literals;
+
 // Wrong if a key that is a list ("[x]: 1") escaped as the YAML library's "bad conversion".
 TEST(YamlDocument, AKeyThatIsAListOrMappingIsRefusedAtItsPosition) {
   EXPECT_THROW_WITH((void)load_yaml_document("case:\n  [x]: 1\n", "f.yaml"), units::InputError,
@@ -38,6 +40,21 @@ TEST(YamlDocument, InvalidUtf8IsRefusedWithItsPosition) {
   EXPECT_THROW_WITH((void)load_yaml_document("a: \xED\xA0\x80\n", "f.yaml"), units::InputError,
                     "byte 0xED is not valid UTF-8");  // a UTF-16 surrogate
   EXPECT_NO_THROW((void)load_yaml_document("title: Kesselhaus S\xC3\xBC" "d, 20 \xC2\xB0" "C\n", "f.yaml"));
+}
+
+// Wrong if a NUL in a description, or a "\0" or "\N" escape in a quoted value, passed the load: the
+// YAML library keeps the NUL and turns "\N" into the lone byte 0x85, which stopped the JSON renderer
+// (found by fuzzing the case run).
+TEST(YamlDocument, ControlCharactersAreRefusedInTheFileAndAfterEscapes) {
+  EXPECT_THROW_WITH((void)load_yaml_document("case:\n  description: >-\n    a\0b\n"s, "f.yaml"),
+                    units::InputError, "f.yaml:3:6: control character U+0000 is not allowed in a text file; remove it");
+  EXPECT_THROW_WITH((void)load_yaml_document("case:\n  title: \"H-101 \\N\"\n", "f.yaml"), units::InputError,
+                    "f.yaml:2:10: an escape in this value (such as \\0 or \\N) gives text that is not plain: byte 0x85 "
+                    "is not valid UTF-8 (byte 7 of the value); write the value without it");
+  EXPECT_THROW_WITH((void)load_yaml_document("case:\n  \"ti\\0tle\": x\n", "f.yaml"), units::InputError,
+                    "gives text that is not plain: control character U+0000");
+  EXPECT_NO_THROW((void)load_yaml_document("case:\n  title: \"a\\tb \\u00B0\"\n", "f.yaml"))
+      << "a tab and a degree sign by escape are plain text";
 }
 
 // Wrong if 100 000 nested brackets gave "not valid YAML: bad file" (or exhausted the stack).

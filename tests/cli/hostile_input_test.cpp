@@ -130,5 +130,20 @@ TEST(HostileInput, TheExcessAirBoundIsStatedAsExclusive) {
       << run.err;
 }
 
+// Wrong if an argument with an invalid byte or a control character ran: it could reach a report or a
+// JSON document, which refuses such bytes.
+TEST(HostileInput, ArgumentsThatAreNotPlainTextAreRefusedBeforeAnythingRuns) {
+  const auto invalid = run_stackbound({"run", kGasBoiler, "--format", "js\xffon"});
+  EXPECT_EQ(invalid.exit_code, 2);
+  EXPECT_EQ(invalid.out, "");
+  EXPECT_NE(invalid.err.find("command-line argument 4 \"js\\xffon\": byte 0xFF is not valid UTF-8 (byte 3); type it as "
+                             "UTF-8 text"),
+            std::string::npos)
+      << invalid.err;
+  const auto control = run_stackbound({"convert", "12\x01 ppm", "NO"});
+  EXPECT_EQ(control.exit_code, 2);
+  EXPECT_NE(control.err.find("control character U+0001"), std::string::npos) << control.err;
+}
+
 }  // namespace
 }  // namespace stackbound::cli

@@ -71,6 +71,23 @@ TEST(ReduceCommand, OneReadingEqualsConvert) {
   std::filesystem::remove_all(dir);
 }
 
+// Wrong if a row holding a NUL and an invalid byte stopped the JSON report (an internal error before):
+// the row is counted as not a number and its bytes are shown escaped.
+TEST(ReduceCommand, ARowOfControlBytesIsCountedAndShownEscapedInJson) {
+  using namespace std::string_literals;
+  const auto dir = std::filesystem::temp_directory_path() / "stackbound_reduce_bytes_test";
+  std::filesystem::create_directories(dir);
+  const auto csv = dir / "bytes.csv";
+  std::ofstream(csv, std::ios::binary) << "time,O2,CO2,CO,NOx,H2O,flow,load,T_amb,RH,status\n"
+                                          "2026-06-15T10:00:00-06:00,10.0,5.5,3.0,40,8.0,300000,41,15,60,OK\n"
+                                       << "2026-06-15T10:01:00-06:00,10.0,5.5,3.0,4\0\xff,8.0,300000,41,15,60,OK\n"s;
+  const auto r = run_stackbound({"reduce", kCase, csv.string(), "--format", "json"});
+  ASSERT_EQ(r.exit_code, 0) << r.err;
+  const nlohmann::json bad_rows = nlohmann::json::parse(r.out).at("summary").at("bad_rows");
+  EXPECT_NE(bad_rows.dump().find(R"(column NOx = \"4\\x00\\xff\": not a number)"), std::string::npos) << bad_rows.dump();
+  std::filesystem::remove_all(dir);
+}
+
 // Wrong if --strict went past the first bad row of the demo (line 556, "---"), or an option were not checked.
 TEST(ReduceCommand, StrictAndBadOptionsExitTwoWithTheReason) {
   const auto strict = run_stackbound({"reduce", kCase, kDay, "--strict"});
