@@ -5,8 +5,8 @@
 
 #include <fmt/format.h>
 
-#include "stackbound/units/plain_text.hpp"
 #include "stackbound/units/input_error.hpp"
+#include "stackbound/units/plain_text.hpp"
 
 namespace stackbound::cases {
 namespace {
@@ -53,7 +53,7 @@ void check_scalar_text(const YAML::Node& scalar, std::string_view origin) {
 
 // Every key a plain scalar, each once per mapping; every scalar plain text; nesting (also by
 // indentation) capped.
-void check_keys(const YAML::Node& node, std::string_view origin, std::size_t depth) {
+void check_nodes(const YAML::Node& node, std::string_view origin, std::size_t depth) {
   if (depth > kMaxYamlNesting) {
     throw units::InputError(fmt::format("{}: lists and mappings nest deeper than {} levels here",
                                         mark_text(origin, node.Mark()), kMaxYamlNesting));
@@ -63,7 +63,7 @@ void check_keys(const YAML::Node& node, std::string_view origin, std::size_t dep
     return;
   }
   if (node.IsSequence()) {
-    for (const YAML::Node& item : node) check_keys(item, origin, depth + 1);
+    for (const YAML::Node& item : node) check_nodes(item, origin, depth + 1);
     return;
   }
   if (!node.IsMap()) return;
@@ -81,7 +81,7 @@ void check_keys(const YAML::Node& node, std::string_view origin, std::size_t dep
                                           mark_text(origin, entry.first.Mark()), key, found->second,
                                           entry.first.Mark().line + 1));
     }
-    check_keys(entry.second, origin, depth + 1);
+    check_nodes(entry.second, origin, depth + 1);
   }
 }
 
@@ -98,7 +98,7 @@ YAML::Node load_yaml_document(std::string_view text, std::string_view origin) {
   } catch (const YAML::Exception& error) {
     throw units::InputError(fmt::format("{}: not valid YAML: {}", origin, error.msg));
   }
-  check_keys(root, origin, 0);
+  check_nodes(root, origin, 0);
   return root;
 }
 

@@ -115,7 +115,7 @@ std::string printable(std::string_view text) {
 
 void require_plain_text(std::string_view text, std::string_view origin) {
   if (const std::optional<TextFault> fault = find_text_fault(text)) {
-    throw units::InputError(
+    throw InputError(
         fmt::format("{}: {}; {}", text_position(origin, text, fault->offset), fault->what, fault->remedy));
   }
 }
