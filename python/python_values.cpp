@@ -4,6 +4,7 @@
 
 #include "stackbound/cases/yaml_document.hpp"
 #include "stackbound/units/input_error.hpp"
+#include "stackbound/units/plain_text.hpp"
 
 namespace stackbound::python {
 
@@ -49,6 +50,14 @@ std::string utf8_text(py::handle text, std::string_view field) {
   return std::string(data, static_cast<std::size_t>(size));
 }
 
+std::string plain_text(py::handle text, std::string_view field) {
+  std::string utf8 = utf8_text(text, field);
+  if (const std::optional<units::TextFault> fault = units::find_text_fault(utf8)) {
+    throw units::InputError(fmt::format("{} = \"{}\": {}; {}", field, units::printable(utf8), fault->what, fault->remedy));
+  }
+  return utf8;
+}
+
 namespace {
 
 std::string where(const std::string& path) { return path.empty() ? "(top level)" : path; }
@@ -77,7 +86,7 @@ YAML::Node to_yaml(py::handle value, const std::string& path, std::size_t depth)
   }
   if (value.is_none()) return YAML::Node(YAML::NodeType::Null);
   if (py::isinstance<py::str>(value))
-    return YAML::Node(utf8_text(value, fmt::format("{}: {}", kDictOrigin, where(path))));
+    return YAML::Node(plain_text(value, fmt::format("{}: {}", kDictOrigin, where(path))));
   if (py::isinstance<py::dict>(value)) {
     YAML::Node map(YAML::NodeType::Map);
     for (const auto& [key, item] : py::reinterpret_borrow<py::dict>(value)) {
@@ -85,7 +94,7 @@ YAML::Node to_yaml(py::handle value, const std::string& path, std::size_t depth)
         throw units::InputError(fmt::format("{}: {}: the key {} is a {}; keys are text", kDictOrigin, where(path),
                                             py::repr(key).cast<std::string>(), type_name(key)));
       }
-      const std::string name = utf8_text(key, fmt::format("{}: {}", kDictOrigin, where(path)));
+      const std::string name = plain_text(key, fmt::format("{}: {}", kDictOrigin, where(path)));
       map[name] = to_yaml(item, path.empty() ? name : path + "." + name, depth + 1);
     }
     return map;
@@ -105,7 +114,7 @@ YAML::Node to_yaml(py::handle value, const std::string& path, std::size_t depth)
 
 std::optional<std::string> option_text(py::handle value, std::string_view option) {
   if (value.is_none()) return std::nullopt;
-  if (py::isinstance<py::str>(value)) return utf8_text(value, option);
+  if (py::isinstance<py::str>(value)) return plain_text(value, option);
   if (!py::isinstance<py::bool_>(value)) {
     if (const auto text = number_text(value)) return text;
   }

@@ -31,6 +31,12 @@ YAML::Node to_yaml(py::handle value, const std::string& path = "", std::size_t d
 // naming `field`.
 std::string utf8_text(py::handle text, std::string_view field);
 
+// The same, and plain text as a case file or a command-line argument must be (units/plain_text.hpp):
+// a control character (other than tab, line feed, carriage return) is a units::InputError naming `field`.
+// Used for case dicts and option values; reduce cells keep utf8_text, as a bad readings row is counted,
+// not refused.
+std::string plain_text(py::handle text, std::string_view field);
+
 // The text of an option value: a str as is, a number as its shortest text; None as nothing. Anything
 // else is a units::InputError naming the option.
 std::optional<std::string> option_text(py::handle value, std::string_view option);

@@ -22,7 +22,7 @@ namespace {
 std::vector<std::string> vary_texts(py::handle vary) {
   std::vector<std::string> texts;
   if (py::isinstance<py::str>(vary)) {
-    texts.push_back(utf8_text(vary, "--vary"));
+    texts.push_back(plain_text(vary, "--vary"));
   } else if (py::isinstance<py::dict>(vary)) {
     for (const auto& [parameter, range] : py::reinterpret_borrow<py::dict>(vary)) {
       texts.push_back(option_text_or_empty(parameter, "--vary") + "=" + option_text_or_empty(range, "--vary"));
@@ -34,7 +34,7 @@ std::vector<std::string> vary_texts(py::handle vary) {
             fmt::format("--vary = {}: expected a text PARAM=FROM:TO:STEPS, e.g. excess_air=5%:45%:9",
                         py::repr(text).cast<std::string>()));
       }
-      texts.push_back(utf8_text(text, "--vary"));
+      texts.push_back(plain_text(text, "--vary"));
     }
   } else {
     throw units::InputError(

@@ -187,6 +187,21 @@ def test_text_without_a_utf8_form_is_input_error_not_a_crash():
         stackbound.run("\ud800.yaml")
 
 
+def test_a_control_character_in_a_dict_case_is_refused_as_in_a_case_file():
+    # Wrong if a NUL or a C1 control in a dict value or key passed into the report, as it did before
+    # (a case file refuses them at load).
+    case = copy.deepcopy(HEATER)
+    case["case"]["title"] = "H-101\x00\x85"
+    with pytest.raises(stackbound.InputError) as raised:
+        stackbound.run(case)
+    assert str(raised.value) == ('<dict>: case.title = "H-101\\x00\\u0085": control character U+0000 is not '
+                                 'allowed in a text file; remove it')
+    case = copy.deepcopy(HEATER)
+    case["case"]["ti\x01tle"] = case["case"].pop("title")
+    with pytest.raises(stackbound.InputError, match="control character U[+]0001"):
+        stackbound.run(case)
+
+
 @pytest.mark.parametrize("value", [float("nan"), float("inf"), -1e308, 10**400, True, None, [], {}],
                          ids=repr)
 def test_any_value_of_a_field_is_a_result_or_input_error(value):
